@@ -1,0 +1,241 @@
+package series
+
+// This file recognises the shape of one date cell. A shape says how the
+// cell is written; which frequency and which day/month order a column has
+// is decided later from all of its cells (see datecolumn.go).
+
+// shape is the written form of a date cell.
+type shape uint8
+
+const (
+	shapeNone  shape = iota // not a date
+	shapeYMD                // 2024-03-01, 2024/03/01
+	shapeYM                 // 2024-03, 2024/03
+	shapeYQ                 // 2024-Q1, 2024Q1, Q1 2024
+	shapeYW                 // 2024-W05, 2024W05
+	shapeY                  // 2024
+	shapeMY                 // 03/2024, 3-2024
+	shapeAB                 // 01/02/2024: day-first or month-first
+	shapeMonY               // Mar 2024, March 2024, Mar-2024
+	shapeInt                // 17: a plain position
+)
+
+// shapeNames describe shapes in decisions and messages.
+var shapeNames = [...]string{
+	shapeNone: "text",
+	shapeYMD:  "dates like 2024-03-01",
+	shapeYM:   "months like 2024-03",
+	shapeYQ:   "quarters like 2024-Q1",
+	shapeYW:   "ISO weeks like 2024-W05",
+	shapeY:    "years like 2024",
+	shapeMY:   "months like 03/2024",
+	shapeAB:   "dates like 01/02/2024",
+	shapeMonY: "months like Mar 2024",
+	shapeInt:  "positions like 1, 2, 3",
+}
+
+// dateCell is one date cell taken apart. For shapeAB, a and b are the first
+// and second numbers, whose roles the column decides.
+type dateCell struct {
+	shape   shape
+	year    int
+	a, b    int  // month and day (YMD), month (YM, MY, MonY), quarter, week, or the two leading numbers of AB
+	hasTime bool // a time of day follows the date
+}
+
+// monthNames holds English month names and their usual abbreviations,
+// lower case, with the month number.
+var monthNames = [...]struct {
+	name string
+	m    int
+}{
+	{"january", 1}, {"jan", 1}, {"february", 2}, {"feb", 2}, {"march", 3}, {"mar", 3},
+	{"april", 4}, {"apr", 4}, {"may", 5}, {"june", 6}, {"jun", 6}, {"july", 7}, {"jul", 7},
+	{"august", 8}, {"aug", 8}, {"september", 9}, {"sept", 9}, {"sep", 9},
+	{"october", 10}, {"oct", 10}, {"november", 11}, {"nov", 11}, {"december", 12}, {"dec", 12},
+}
+
+// digits reads a run of ASCII digits at b[i:], at most 9, and returns its
+// value, its length and the index after it.
+func digits(b []byte, i int) (v, n, j int) {
+	for j = i; j < len(b) && j-i < 10 && b[j] >= '0' && b[j] <= '9'; j++ {
+		v = v*10 + int(b[j]-'0')
+	}
+	return v, j - i, j
+}
+
+// isDateSep reports whether c separates the parts of a date.
+func isDateSep(c byte) bool { return c == '-' || c == '/' || c == '.' }
+
+// scanDate recognises the shape of a trimmed cell. It checks only the
+// shape and the ranges that do not depend on the column (month 1..12,
+// quarter 1..4, week 1..53, day 1..31); scanDate never allocates.
+func scanDate(b []byte) dateCell {
+	if len(b) == 0 {
+		return dateCell{}
+	}
+	if c := b[0] | 0x20; c >= 'a' && c <= 'z' {
+		return scanLetterFirst(b)
+	}
+	v1, n1, i := digits(b, 0)
+	if n1 == 0 {
+		return dateCell{}
+	}
+	if i == len(b) {
+		if n1 == 4 {
+			return dateCell{shape: shapeY, year: v1}
+		}
+		if n1 <= 9 && (n1 == 1 || b[0] != '0') {
+			return dateCell{shape: shapeInt, year: v1}
+		}
+		return dateCell{}
+	}
+	if n1 == 4 {
+		return scanYearFirst(b, v1, i)
+	}
+	if n1 > 2 || !isDateSep(b[i]) {
+		return dateCell{}
+	}
+	sep := b[i]
+	v2, n2, j := digits(b, i+1)
+	if n2 == 4 && j == len(b) {
+		if v1 >= 1 && v1 <= 12 {
+			return dateCell{shape: shapeMY, year: v2, a: v1}
+		}
+		return dateCell{}
+	}
+	if n2 == 0 || n2 > 2 || j >= len(b) || b[j] != sep {
+		return dateCell{}
+	}
+	y, n3, k := digits(b, j+1)
+	if n3 != 4 || v1 < 1 || v2 < 1 || v1 > 31 || v2 > 31 || (v1 > 12 && v2 > 12) {
+		return dateCell{}
+	}
+	c := dateCell{shape: shapeAB, year: y, a: v1, b: v2}
+	return withTime(c, b, k)
+}
+
+// scanYearFirst handles cells starting with a four-digit year y; b[i] is
+// the byte after the year.
+func scanYearFirst(b []byte, y, i int) dateCell {
+	c := b[i]
+	if c == ' ' && i+1 < len(b) {
+		i++
+		c = b[i]
+	}
+	if c == '-' && i+1 < len(b) && (b[i+1]|0x20 == 'q' || b[i+1]|0x20 == 'w') {
+		i++
+		c = b[i]
+	}
+	switch c | 0x20 {
+	case 'q':
+		if i+2 == len(b) && b[i+1] >= '1' && b[i+1] <= '4' {
+			return dateCell{shape: shapeYQ, year: y, a: int(b[i+1] - '0')}
+		}
+		return dateCell{}
+	case 'w':
+		w, n, j := digits(b, i+1)
+		if n == 2 && j == len(b) && w >= 1 && w <= 53 {
+			return dateCell{shape: shapeYW, year: y, a: w}
+		}
+		return dateCell{}
+	}
+	if c != '-' && c != '/' && c != '.' {
+		return dateCell{}
+	}
+	m, n, j := digits(b, i+1)
+	if n == 0 || n > 2 || m < 1 || m > 12 {
+		return dateCell{}
+	}
+	if j == len(b) {
+		return dateCell{shape: shapeYM, year: y, a: m}
+	}
+	if b[j] != c {
+		return dateCell{}
+	}
+	d, n, k := digits(b, j+1)
+	if n == 0 || n > 2 || d < 1 || d > 31 {
+		return dateCell{}
+	}
+	return withTime(dateCell{shape: shapeYMD, year: y, a: m, b: d}, b, k)
+}
+
+// scanLetterFirst handles "Q1 2024", "Mar 2024", "March 2024", "Mar-2024".
+func scanLetterFirst(b []byte) dateCell {
+	if b[0]|0x20 == 'q' && len(b) >= 7 && b[1] >= '1' && b[1] <= '4' && (b[2] == ' ' || b[2] == '-' || b[2] == '/') {
+		y, n, j := digits(b, 3)
+		if n == 4 && j == len(b) {
+			return dateCell{shape: shapeYQ, year: y, a: int(b[1] - '0')}
+		}
+		return dateCell{}
+	}
+	i := 0
+	for i < len(b) && (b[i]|0x20) >= 'a' && (b[i]|0x20) <= 'z' {
+		i++
+	}
+	m := monthNumber(b[:i])
+	if m == 0 || i == len(b) {
+		return dateCell{}
+	}
+	if b[i] == '.' && i+1 < len(b) {
+		i++
+	}
+	if b[i] != ' ' && b[i] != '-' && b[i] != '/' {
+		return dateCell{}
+	}
+	y, n, j := digits(b, i+1)
+	if n != 4 || j != len(b) {
+		return dateCell{}
+	}
+	return dateCell{shape: shapeMonY, year: y, a: m}
+}
+
+// monthNumber returns 1..12 for an English month name or abbreviation in
+// any case, else 0.
+func monthNumber(word []byte) int {
+	if len(word) < 3 || len(word) > 9 {
+		return 0
+	}
+	var low [9]byte
+	for i, c := range word {
+		low[i] = c | 0x20
+	}
+	w := string(low[:len(word)])
+	for _, mn := range monthNames {
+		if mn.name == w {
+			return mn.m
+		}
+	}
+	return 0
+}
+
+// withTime accepts the end of a date cell at b[k:]: nothing, or a time of
+// day such as "T13:45", " 13:45:07", " 1:45 PM", "T13:45:07.5Z",
+// "13:45+02:00". The date stays the date written; a zone offset does not
+// move it to another day.
+func withTime(c dateCell, b []byte, k int) dateCell {
+	if k == len(b) {
+		return c
+	}
+	if b[k] != 'T' && b[k] != ' ' {
+		return dateCell{}
+	}
+	h, n, j := digits(b, k+1)
+	if n == 0 || n > 2 || h > 23 || j >= len(b) || b[j] != ':' {
+		return dateCell{}
+	}
+	mi, n, j := digits(b, j+1)
+	if n != 2 || mi > 59 {
+		return dateCell{}
+	}
+	for ; j < len(b); j++ {
+		switch ch := b[j]; {
+		case ch >= '0' && ch <= '9', ch == ':', ch == '.', ch == '+', ch == '-', ch == ' ', ch == 'Z':
+		case ch|0x20 == 'a' || ch|0x20 == 'p' || ch|0x20 == 'm':
+		default:
+			return dateCell{}
+		}
+	}
+	c.hasTime = true
+	return c
+}
