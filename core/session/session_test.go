@@ -192,4 +192,3 @@ func BenchmarkParse(b *testing.B) {
 		})
 	}
 }
-
