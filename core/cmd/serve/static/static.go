@@ -1,0 +1,130 @@
+// Package static serves a built Quillcast site from a folder: the page, its
+// script and style, the WebAssembly engine and the demo files.
+//
+// It exists so that `make serve` needs nothing but Go, and so that the
+// browser tests can start the same server in-process with [Handler]. Every
+// response carries the page's Content-Security-Policy ([Policy]) and a MIME
+// type chosen from a fixed table ([ContentType]), so a browser gets
+// `application/wasm` for the engine whatever the machine's MIME database
+// says. Names that carry a content hash (`app.3f9a2c1be0.js`) are cached for a
+// year; everything else is revalidated on each load.
+package static
+
+import (
+	"net/http"
+	"os"
+	"path"
+	"path/filepath"
+	"regexp"
+	"strings"
+)
+
+// Policy is the Content-Security-Policy sent with every response. Scripts and
+// styles come only from the site itself; WebAssembly may be compiled;
+// connections are allowed only to the site itself (to fetch the engine and the
+// demo files); workers may come from the site or from Blob URLs.
+const Policy = "default-src 'none'; " +
+	"script-src 'self' 'wasm-unsafe-eval'; " +
+	"style-src 'self'; " +
+	"img-src 'self' data:; " +
+	"connect-src 'self'; " +
+	"worker-src 'self' blob:; " +
+	"base-uri 'none'; " +
+	"form-action 'none'; " +
+	"frame-ancestors 'none'"
+
+// contentTypes maps a lower-case file extension to the Content-Type sent.
+var contentTypes = map[string]string{
+	".html": "text/html; charset=utf-8",
+	".css":  "text/css; charset=utf-8",
+	".js":   "text/javascript; charset=utf-8",
+	".mjs":  "text/javascript; charset=utf-8",
+	".wasm": "application/wasm",
+	".svg":  "image/svg+xml",
+	".png":  "image/png",
+	".ico":  "image/x-icon",
+	".json": "application/json",
+	".md":   "text/markdown; charset=utf-8",
+	".csv":  "text/csv; charset=utf-8",
+	".tsv":  "text/tab-separated-values; charset=utf-8",
+	".txt":  "text/plain; charset=utf-8",
+	".zip":  "application/zip",
+	".gz":   "application/gzip",
+}
+
+// hashedName matches a file name with a content hash of at least eight hex
+// digits before its extension, such as "quillcast.0a1b2c3d4e.wasm".
+var hashedName = regexp.MustCompile(`\.[0-9a-f]{8,}\.[a-z0-9]+$`)
+
+// ContentType returns the Content-Type for a file name, or
+// "application/octet-stream" for an extension not in the table.
+func ContentType(name string) string {
+	if t, ok := contentTypes[strings.ToLower(path.Ext(name))]; ok {
+		return t
+	}
+	return "application/octet-stream"
+}
+
+// CacheControl returns the Cache-Control value for a file name: a year and
+// immutable for content-hashed names, revalidate on every load otherwise.
+func CacheControl(name string) string {
+	if hashedName.MatchString(name) {
+		return "public, max-age=31536000, immutable"
+	}
+	return "no-cache"
+}
+
+// Handler serves the files under dir. Only GET and HEAD are answered; names
+// with a segment starting with "." and folders without an index.html are not
+// found, so nothing but the site itself is ever listed or sent.
+func Handler(dir string) http.Handler {
+	files := http.FileServer(http.Dir(dir))
+	return http.HandlerFunc(func(w http.ResponseWriter, r *http.Request) {
+		h := w.Header()
+		h.Set("Content-Security-Policy", Policy)
+		h.Set("X-Content-Type-Options", "nosniff")
+		h.Set("Referrer-Policy", "no-referrer")
+		if r.Method != http.MethodGet && r.Method != http.MethodHead {
+			h.Set("Allow", "GET, HEAD")
+			http.Error(w, "only GET and HEAD are served", http.StatusMethodNotAllowed)
+			return
+		}
+		name := path.Clean("/" + r.URL.Path)
+		if hidden(name) || !servable(dir, name) {
+			http.NotFound(w, r)
+			return
+		}
+		file := name
+		if strings.HasSuffix(r.URL.Path, "/") {
+			file = path.Join(name, "index.html")
+		}
+		h.Set("Content-Type", ContentType(file))
+		h.Set("Cache-Control", CacheControl(path.Base(file)))
+		files.ServeHTTP(w, r)
+	})
+}
+
+// hidden reports whether a cleaned URL path has a segment starting with ".".
+func hidden(name string) bool {
+	for _, seg := range strings.Split(name, "/") {
+		if strings.HasPrefix(seg, ".") {
+			return true
+		}
+	}
+	return false
+}
+
+// servable reports whether name is a regular file under dir, or a folder
+// holding an index.html.
+func servable(dir, name string) bool {
+	p := filepath.Join(dir, filepath.FromSlash(name))
+	st, err := os.Stat(p)
+	if err != nil {
+		return false
+	}
+	if !st.IsDir() {
+		return st.Mode().IsRegular()
+	}
+	st, err = os.Stat(filepath.Join(p, "index.html"))
+	return err == nil && st.Mode().IsRegular()
+}
