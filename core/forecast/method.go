@@ -54,9 +54,21 @@ type Fit struct {
 	Follows   Patterns  // patterns this fit can follow
 	Notes     []string  // plain-words remarks for the reader (a parameter on its bound, ...)
 
+	// train is a copy of the training series, for [Fit.Residuals].
+	train []float64
 	// path returns the point forecasts for horizons 1..h.
 	path func(h int) []float64
 	// variance returns the forecast-error variance for horizons 1..h and
 	// whether an analytic formula exists for this method.
 	variance func(h int) ([]float64, bool)
+	// df is the degrees of freedom of the Student t quantile used by
+	// [Fit.Interval]; 0 means the standard normal quantile.
+	df float64
+	// bounds, when set, replaces the symmetric interval built from variance
+	// (for example a regression on logs whose interval is skewed).
+	bounds func(h int, level float64) (lo, hi []float64, ok bool)
+	// sigma2 is the one-step error variance behind the analytic intervals;
+	// hasSigma2 says whether it was estimated.
+	sigma2    float64
+	hasSigma2 bool
 }
