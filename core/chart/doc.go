@@ -1,0 +1,44 @@
+// Package chart draws the notebook's charts as SVG text: standard library
+// only, deterministic output, every number written with at most two
+// decimals, every piece of caller text escaped.
+//
+// # Where to start
+//
+// Fill one of the chart values and call its SVG method:
+//
+//   - [Line]: series over periods: the actual series, smoothed lines,
+//     forecasts with prediction-interval bands, the holdout marked by a
+//     labelled divider and a light tint. With ZeroLine it also serves for
+//     forecast errors over time drawn as lines.
+//   - [Bars]: grouped bars around zero: forecast errors over time, accuracy
+//     by horizon.
+//   - [Sweep]: an accuracy measure against a parameter, training and
+//     validation lines, the best value marked, the under- and
+//     over-smoothing sides named.
+//   - [ACF]: autocorrelation bars by lag with ± bounds.
+//   - [Panels]: stacked panels sharing the period axis, such as the
+//     observed, trend, seasonal and remainder parts of a decomposition.
+//
+// Inputs are plain data: periods are positions 0, 1, 2, … whose labels the
+// caller gives as strings ("2024-03", "2024-Q1", "2024-W05", "2024-03-15",
+// "2024"); values are float64 with NaN for a gap. Ticks on the period axis
+// are thinned from the label shape (years for monthly data over several
+// years, quarters over a short span, …) unless [Frequency] says otherwise.
+// Value ticks are "nice" numbers with thousands separators.
+//
+// # Look
+//
+// Colours come from one palette of our own, defined once in palette.go,
+// applied by CSS classes (prefix "qc-") and an embedded style sheet with a
+// dark-scheme variant, so the same SVG reads inline in the page and in a
+// standalone memo. Every coloured line also has its own dash pattern and
+// marker shape, so nothing depends on telling hues apart.
+//
+// # Safety
+//
+// SVG methods never panic and never fail: missing values, unequal lengths
+// (missing positions count as gaps), empty input and infinities draw what
+// can be drawn and say "no data" where nothing can. Titles, names and labels
+// are escaped for XML, and characters XML cannot carry are replaced by
+// U+FFFD.
+package chart
