@@ -152,9 +152,11 @@ func ParseMeasure(name string) (Measure, error) {
 	return 0, fmt.Errorf("unknown accuracy measure %q; write one of %s", name, strings.Join(names, ", "))
 }
 
-// editDistance returns the Levenshtein distance between a and b, counted in
-// bytes (measure names are ASCII).
+// editDistance returns the optimal string alignment distance between a and
+// b: the fewest insertions, deletions, substitutions and swaps of two
+// neighbouring bytes that turn one into the other (measure names are ASCII).
 func editDistance(a, b string) int {
+	prev2 := make([]int, len(b)+1)
 	prev := make([]int, len(b)+1)
 	cur := make([]int, len(b)+1)
 	for j := range prev {
@@ -168,8 +170,11 @@ func editDistance(a, b string) int {
 				cost = 0
 			}
 			cur[j] = min(prev[j]+1, cur[j-1]+1, prev[j-1]+cost)
+			if i > 1 && j > 1 && a[i-1] == b[j-2] && a[i-2] == b[j-1] {
+				cur[j] = min(cur[j], prev2[j-2]+1)
+			}
 		}
-		prev, cur = cur, prev
+		prev2, prev, cur = prev, cur, prev2
 	}
 	return prev[len(b)]
 }
