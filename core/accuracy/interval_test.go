@@ -63,7 +63,7 @@ func TestScoreIntervals(t *testing.T) {
 			level: 0.95, n: 2, skipped: 2, coverage: 1, winkler: 3, width: 3,
 		},
 		{
-			name: "empty", level: 0.8, reason: "coverage undefined: there is no period to score",
+			name: "empty", level: 0.8, reason: "undefined: there is no period to score",
 		},
 		{
 			name:   "all missing",
