@@ -35,14 +35,20 @@ func ACF(y []float64, maxLag int) ([]float64, error) {
 	return r, nil
 }
 
-// ACFBound returns 1.96/sqrt(n), the approximate 95% band around zero for
-// the autocorrelations of n values of white noise (common practice; Box,
-// Jenkins and Reinsel 2008, section 6.2.2). It returns NaN for n below 1.
+// z975 is the 97.5% quantile of the standard normal distribution, the
+// "1.96" of a 95% band, to full precision (the value of
+// distuv.UnitNormal.Quantile(0.975)).
+const z975 = 1.959963984540054
+
+// ACFBound returns 1.96/sqrt(n) (with the exact normal quantile), the
+// approximate 95% band around zero for the autocorrelations of n values of
+// white noise (common practice; Box, Jenkins and Reinsel 2008, section
+// 6.2.2). It returns NaN for n below 1.
 func ACFBound(n int) float64 {
 	if n < 1 {
 		return math.NaN()
 	}
-	return 1.96 / math.Sqrt(float64(n))
+	return z975 / math.Sqrt(float64(n))
 }
 
 // autocorrelations computes r_0..r_maxLag for finite y with
