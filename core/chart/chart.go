@@ -49,9 +49,9 @@ type Series struct {
 // Positions where either bound is NaN or missing are not shaded.
 type Band struct {
 	// Level is the nominal coverage in percent, for example 80 or 95.
-	Level  float64
-	Lower  []float64
-	Upper  []float64
+	Level float64
+	Lower []float64
+	Upper []float64
 }
 
 // Frequency says how often periods come, which decides where the period

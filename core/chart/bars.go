@@ -1,0 +1,140 @@
+package chart
+
+import "strings"
+
+// Bars draws grouped bars from zero, one group per label and one bar per
+// series in each group: forecast errors over time (labels are periods) or
+// accuracy by horizon (labels are "1", "2", … with Frequency Unlabelled).
+type Bars struct {
+	Frame
+	// Labels names each group; its length is the number of groups. When
+	// empty, the longest series decides the count and groups are
+	// labelled 1, 2, 3, ….
+	Labels []string
+	// Frequency decides the label ticks; the zero value infers it.
+	Frequency Frequency
+	// Series give one bar per group each; NaN leaves the place empty.
+	// Bands are ignored.
+	Series []Series
+	// HoldoutStart and HoldoutLabel mark the holdout as in [Line].
+	HoldoutStart int
+	HoldoutLabel string
+}
+
+// SVG returns the chart as a standalone SVG document. It never fails.
+func (b Bars) SVG() string {
+	labels, n := positions(b.Labels, b.Series)
+	w, h := frameSize(b.Frame, 720, 360)
+	var items []legendItem
+	for i, s := range b.Series {
+		items = append(items, legendItem{name: s.Name, kind: swatchBar, slot: i})
+	}
+	var vr valueRange
+	for _, s := range b.Series {
+		addUpTo(&vr, s.Values, n)
+	}
+	empty := !vr.ok
+	desc := b.describe(labels, vr)
+	vr.add(0)
+	c := newCanvas(b.Frame, w, h, desc, 96*n*max(len(b.Series), 1))
+	top := 10.0
+	if b.Title != "" {
+		top = titleHeight
+	}
+	lh := legendHeight(items, float64(w))
+	ar := area{top: top + lh + 8, right: float64(w) - 18, bottom: float64(h) - 28}
+	if b.XTitle != "" {
+		ar.bottom -= 18
+	}
+	ax := niceAxis(vr, max(3, int(ar.height()/48)))
+	ar.left = valueAxisWidth(ax, b.YTitle)
+	p := periodAxis{n: n, ar: ar}
+	drawLegend(c, items, top, float64(w))
+	drawHoldout(c, p, b.HoldoutStart, b.HoldoutLabel)
+	drawValueAxis(c, ax, ar, b.YTitle)
+	if n == 0 || empty {
+		c.noData(ar)
+	}
+	drawBarGroups(c, p, ax, b.Series)
+	y0 := ax.y(0, ar)
+	c.line(ar.left, y0, ar.right, y0, "qc-zero")
+	drawPeriodAxis(c, p, labels, b.Frequency, b.XTitle)
+	return c.finish()
+}
+
+// drawBarGroups writes the bars; when bars are wide enough each carries its
+// series' marker at its end, so series differ by shape as well as colour.
+func drawBarGroups(c *canvas, p periodAxis, ax axis, series []Series) {
+	k := len(series)
+	if k == 0 || p.n == 0 {
+		return
+	}
+	group := p.step() * 0.8
+	bw := group / float64(k)
+	y0 := ax.y(0, p.ar)
+	for j, s := range series {
+		slot := j
+		c.s(`<g class="` + fill(slot) + ` qc-bar">` + "\n")
+		for i := 0; i < p.n; i++ {
+			v := at(s.Values, i)
+			if !finite(v) {
+				continue
+			}
+			x := p.x(i) - group/2 + float64(j)*bw
+			y := clampY(ax.y(v, p.ar), p.ar)
+			c.s(`<rect x="`)
+			c.num(x)
+			c.s(`" y="`)
+			c.num(min(y, y0))
+			c.s(`" width="`)
+			c.num(max(bw-0.6, 0.4))
+			c.s(`" height="`)
+			c.num(max(abs(y-y0), 0.5))
+			c.s(`"/>` + "\n")
+		}
+		c.s("</g>\n")
+		if k > 1 && bw >= 7 {
+			for i := 0; i < p.n; i++ {
+				v := at(s.Values, i)
+				if !finite(v) {
+					continue
+				}
+				x := p.x(i) - group/2 + (float64(j)+0.5)*bw
+				y := clampY(ax.y(v, p.ar), p.ar)
+				off := -6.0
+				if v < 0 {
+					off = 6
+				}
+				c.marker(slot, x, y+off, 3)
+			}
+		}
+	}
+}
+
+func abs(v float64) float64 {
+	if v < 0 {
+		return -v
+	}
+	return v
+}
+
+func (b Bars) describe(labels []string, vr valueRange) string {
+	var d strings.Builder
+	d.WriteString("Bar chart")
+	describePeriods(&d, labels)
+	if len(b.Series) > 0 {
+		d.WriteString(" Bars: ")
+		for i, s := range b.Series {
+			if i > 0 {
+				d.WriteString("; ")
+			}
+			d.WriteString(s.Name)
+		}
+		d.WriteString(".")
+	}
+	if b.HoldoutStart > 0 && b.HoldoutStart < len(labels) {
+		d.WriteString(" The holdout begins at " + labels[b.HoldoutStart] + ".")
+	}
+	describeRange(&d, vr)
+	return d.String()
+}
