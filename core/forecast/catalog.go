@@ -65,6 +65,10 @@ func Catalog() []Spec {
 		driftSpec(),
 		meanSpec(),
 		movingAverageSpec(),
+		sesSpec(),
+		holtSpec(),
+		dampedSpec(),
+		holtWintersSpec(),
 	}
 	for i := range specs {
 		specs[i].New = checked(specs[i])

@@ -54,6 +54,13 @@ type Fit struct {
 	Follows   Patterns  // patterns this fit can follow
 	Notes     []string  // plain-words remarks for the reader (a parameter on its bound, ...)
 
+	// Components holds the state paths after each period, length N, for
+	// methods with states: "level", "trend", "season". Nil otherwise.
+	Components map[string][]float64
+	// Evaluations counts evaluations of the in-sample error made while
+	// estimating parameters; 0 when nothing was estimated.
+	Evaluations int
+
 	// train is a copy of the training series, for [Fit.Residuals].
 	train []float64
 	// path returns the point forecasts for horizons 1..h.

@@ -1,0 +1,220 @@
+package forecast
+
+import "math"
+
+// boxMin is a small projected quasi-Newton minimiser for a few variables
+// inside a box lo <= x <= hi, used to estimate smoothing constants.
+//
+// Why not gonum/optimize: it has no bounded method (a transform to an
+// unbounded space never reaches a bound where smoothing constants often
+// belong), and importing it pulls in gonum's stat/distmv and with it a
+// module this project does not depend on. The problems here have at most
+// four variables, so a plain loop is short and fast.
+//
+// Method: the projected BFGS method with an active set. Variables at a
+// bound whose gradient pushes outwards are held; the others move along
+// -H*g, where H is the BFGS inverse-Hessian estimate, and the step is
+// projected onto the box and shortened until the Armijo condition holds.
+// Convergence means the projected gradient max|P(x-g)-x| fell below tol.
+// Source: D. P. Bertsekas (1982), "Projected Newton methods for
+// optimization problems with simple constraints", SIAM Journal on Control
+// and Optimization 20(2), 221-246; J. Nocedal and S. J. Wright, Numerical
+// Optimization, 2nd ed. (2006), sections 6.1 (BFGS) and 16.7 (gradient
+// projection).
+type boxMin struct {
+	lo, hi   []float64
+	tol      float64 // projected-gradient tolerance
+	maxEvals int     // evaluation budget
+}
+
+// boxResult is the outcome of [boxMin.run].
+type boxResult struct {
+	x         []float64
+	f         float64
+	converged bool
+	evals     int
+}
+
+// run minimises fg from x0 (moved into the box first). fg returns the
+// function value and writes the gradient into grad.
+func (b boxMin) run(fg func(x, grad []float64) float64, x0 []float64) boxResult {
+	k := len(x0)
+	x := make([]float64, k)
+	for i := range x {
+		x[i] = math.Min(math.Max(x0[i], b.lo[i]), b.hi[i])
+	}
+	g := make([]float64, k)
+	f := fg(x, g)
+	res := boxResult{x: x, f: f, evals: 1}
+	if math.IsInf(f, 0) || math.IsNaN(f) {
+		return res
+	}
+	h := identity(k, 0)
+	xn, gn, d, s, yv := make([]float64, k), make([]float64, k), make([]float64, k), make([]float64, k), make([]float64, k)
+	for res.evals < b.maxEvals {
+		if b.projGrad(x, g) < b.tol {
+			res.converged = true
+			break
+		}
+		active := b.active(x, g)
+		b.direction(h, g, active, d)
+		if h == nil || dot(g, d) >= 0 {
+			// First step or a bad direction: steepest descent, scaled so
+			// that the largest move is a tenth of its interval.
+			h = nil
+			scale := 0.0
+			for i := range d {
+				d[i] = 0
+				if !active[i] {
+					d[i] = -g[i]
+					scale = math.Max(scale, math.Abs(g[i])/(b.hi[i]-b.lo[i]))
+				}
+			}
+			if scale == 0 {
+				res.converged = true
+				break
+			}
+			for i := range d {
+				d[i] *= 0.1 / scale
+			}
+		}
+		fn, ok := b.search(fg, x, f, g, d, xn, gn, &res)
+		if !ok {
+			if h == nil {
+				break // no decrease even along the steepest direction
+			}
+			h = nil // retry from steepest descent
+			continue
+		}
+		for i := range s {
+			s[i], yv[i] = xn[i]-x[i], gn[i]-g[i]
+		}
+		h = bfgsUpdate(h, s, yv)
+		copy(x, xn)
+		copy(g, gn)
+		df := f - fn
+		f = fn
+		if df <= 1e-14*math.Max(1, math.Abs(f)) && b.projGrad(x, g) < 100*b.tol {
+			res.converged = true
+			break
+		}
+	}
+	res.x, res.f = x, f
+	if !res.converged && b.projGrad(x, g) < b.tol {
+		res.converged = true
+	}
+	return res
+}
+
+// search shortens the projected step along d until the Armijo condition
+// holds; it writes the new point and gradient into xn and gn.
+func (b boxMin) search(fg func(x, grad []float64) float64, x []float64, f float64, g, d, xn, gn []float64, res *boxResult) (float64, bool) {
+	t := 1.0
+	for range 30 {
+		if res.evals >= b.maxEvals {
+			return f, false
+		}
+		moved := 0.0
+		decrease := 0.0
+		for i := range x {
+			xn[i] = math.Min(math.Max(x[i]+t*d[i], b.lo[i]), b.hi[i])
+			moved = math.Max(moved, math.Abs(xn[i]-x[i]))
+			decrease += g[i] * (xn[i] - x[i])
+		}
+		if moved == 0 {
+			return f, false
+		}
+		fn := fg(xn, gn)
+		res.evals++
+		if fn <= f+1e-4*decrease && !math.IsNaN(fn) {
+			return fn, true
+		}
+		t *= 0.5
+	}
+	return f, false
+}
+
+// active marks variables held at a bound: at the lower bound with a
+// positive gradient or at the upper bound with a negative one.
+func (b boxMin) active(x, g []float64) []bool {
+	a := make([]bool, len(x))
+	for i := range x {
+		eps := 1e-10 * (b.hi[i] - b.lo[i])
+		a[i] = (x[i] <= b.lo[i]+eps && g[i] > 0) || (x[i] >= b.hi[i]-eps && g[i] < 0)
+	}
+	return a
+}
+
+// direction sets d = -H*g over the free variables (0 for held ones).
+func (b boxMin) direction(h [][]float64, g []float64, active []bool, d []float64) {
+	for i := range d {
+		d[i] = 0
+		if active[i] || h == nil {
+			continue
+		}
+		for j := range g {
+			if !active[j] {
+				d[i] -= h[i][j] * g[j]
+			}
+		}
+	}
+}
+
+// projGrad returns max|P(x-g)-x|, zero exactly at a first-order optimum.
+func (b boxMin) projGrad(x, g []float64) float64 {
+	m := 0.0
+	for i := range x {
+		p := math.Min(math.Max(x[i]-g[i], b.lo[i]), b.hi[i])
+		m = math.Max(m, math.Abs(p-x[i]))
+	}
+	return m
+}
+
+// bfgsUpdate returns the BFGS update of the inverse Hessian h (nil means
+// not yet started: the first update begins from a scaled identity). The
+// update is skipped when the curvature s'y is not positive.
+func bfgsUpdate(h [][]float64, s, y []float64) [][]float64 {
+	sy := dot(s, y)
+	if sy <= 1e-16*math.Sqrt(dot(s, s)*dot(y, y)) {
+		return h
+	}
+	k := len(s)
+	if h == nil {
+		h = identity(k, sy/dot(y, y))
+	}
+	rho := 1 / sy
+	hy := make([]float64, k)
+	for i := range k {
+		for j := range k {
+			hy[i] += h[i][j] * y[j]
+		}
+	}
+	yhy := dot(y, hy)
+	for i := range k {
+		for j := range k {
+			h[i][j] += (1+rho*yhy)*rho*s[i]*s[j] - rho*(hy[i]*s[j]+s[i]*hy[j])
+		}
+	}
+	return h
+}
+
+// identity returns c times the k-by-k identity, or nil when c is 0.
+func identity(k int, c float64) [][]float64 {
+	if c == 0 {
+		return nil
+	}
+	h := make([][]float64, k)
+	for i := range h {
+		h[i] = make([]float64, k)
+		h[i][i] = c
+	}
+	return h
+}
+
+func dot(a, b []float64) float64 {
+	s := 0.0
+	for i := range a {
+		s += a[i] * b[i]
+	}
+	return s
+}

@@ -1,0 +1,67 @@
+package forecast
+
+import (
+	"math"
+	"math/rand/v2"
+	"testing"
+)
+
+// TestSSEGradient compares the forward-mode gradient with central finite
+// differences on a seeded seasonal series for every model form.
+func TestSSEGradient(t *testing.T) {
+	rng := rand.New(rand.NewPCG(3, 5))
+	y := seededSeasonal(rng, 48, 4)
+	forms := []struct {
+		name string
+		f    esForm
+	}{
+		{"ses", esForm{m: 1}},
+		{"holt", esForm{trend: true, m: 1}},
+		{"additive", esForm{trend: true, season: Additive, m: 4}},
+		{"multiplicative", esForm{trend: true, season: Multiplicative, m: 4}},
+	}
+	p := [nConst]float64{0.4, 0.2, 0.3, 0.9}
+	for _, tt := range forms {
+		t.Run(tt.name, func(t *testing.T) {
+			init := esStates{level: y[0], trend: 0.5, season: []float64{0, 0, 0, 0}}
+			if tt.f.season == Multiplicative {
+				init.season = []float64{1.05, 0.95, 1.1, 0.9}
+			}
+			init.season = init.season[:tt.f.m]
+			if tt.f.m == 1 {
+				init.season = []float64{0}
+				if tt.f.season == Multiplicative {
+					init.season = []float64{1}
+				}
+			}
+			w := newESWork(tt.f.m)
+			var g [nConst]float64
+			tt.f.sseGrad(y, p, init, w, &g)
+			for k := range nConst {
+				const step = 1e-6
+				up, down := p, p
+				up[k] += step
+				down[k] -= step
+				num := (tt.f.sseGrad(y, up, init, w, nil) - tt.f.sseGrad(y, down, init, w, nil)) / (2 * step)
+				if math.Abs(num-g[k]) > 1e-4*(1+math.Abs(num)) {
+					t.Errorf("d/d%s = %g, finite difference %g", constName(k), g[k], num)
+				}
+			}
+			sse := tt.f.sseGrad(y, p, init, w, nil)
+			if run := tt.f.run(y, p, init).sse; !within(sse, run, 1e-9, 1e-12) {
+				t.Errorf("sseGrad = %g, run = %g", sse, run)
+			}
+		})
+	}
+}
+
+
+// seededSeasonal returns a positive trending seasonal series from rng.
+func seededSeasonal(rng *rand.Rand, n, m int) []float64 {
+	y := make([]float64, n)
+	for t := range y {
+		season := 10 * math.Sin(2*math.Pi*float64(t%max(m, 1))/float64(max(m, 1)))
+		y[t] = 100 + 0.5*float64(t) + season + 3*rng.NormFloat64()
+	}
+	return y
+}
