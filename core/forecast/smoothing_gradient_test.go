@@ -55,7 +55,6 @@ func TestSSEGradient(t *testing.T) {
 	}
 }
 
-
 // seededSeasonal returns a positive trending seasonal series from rng.
 func seededSeasonal(rng *rand.Rand, n, m int) []float64 {
 	y := make([]float64, n)
