@@ -1,0 +1,166 @@
+package diagnose
+
+import (
+	"errors"
+	"fmt"
+	"math"
+	"math/rand/v2"
+	"slices"
+	"testing"
+
+	"gonum.org/v1/gonum/stat/distuv"
+)
+
+func TestMannKendallHand(t *testing.T) {
+	t.Parallel()
+	tests := []struct {
+		name    string
+		y       []float64
+		s, varS float64
+		z       float64
+		slope   float64
+	}{
+		// Hand calculation: of the 10 pairs of 1,3,2,5,4, 8 rise and 2 fall,
+		// S = 6; VarS = 5·4·15/18 = 16.667; Z = (6-1)/sqrt(16.667) = 1.2247.
+		// The pairwise slopes sorted are -1,-1,1/3,0.5,0.75,1,1,4/3,2,3:
+		// Sen's slope = (0.75+1)/2 = 0.875.
+		{"no ties", []float64{1, 3, 2, 5, 4}, 6, 300.0 / 18, 5 / math.Sqrt(300.0/18), 0.875},
+		// Hand calculation: 1,2,2,3 has 5 rising pairs and one tie, S = 5;
+		// one tie group of 2 takes 2·1·9 = 18 off 4·3·13 = 156: VarS = 138/18;
+		// Z = 4/sqrt(138/18). Slopes 1, 1/2, 2/3, 0, 1/2, 1 sorted:
+		// 0, 1/2, 1/2, 2/3, 1, 1; median (1/2+2/3)/2 = 7/12.
+		{"tied values", []float64{1, 2, 2, 3}, 5, 138.0 / 18, 4 / math.Sqrt(138.0/18), 7.0 / 12},
+		// Hand calculation: a falling line, every pair falls: S = -10,
+		// Z = (-10+1)/sqrt(16.667), slope -2.
+		{"falling", []float64{10, 8, 6, 4, 2}, -10, 300.0 / 18, -9 / math.Sqrt(300.0/18), -2},
+		// Hand calculation: 1,2,1,2,1,2: rising pairs 6, falling 3, ties 6;
+		// S = 3; VarS = (6·5·17 - 2·(3·2·11))/18 = (510-132)/18 = 21;
+		// Z = 2/sqrt(21). Slopes: 0 six times, ±1/1, ±1/3, ±1/5 give a median of 0.
+		{"flat median slope", []float64{1, 2, 1, 2, 1, 2}, 3, 21, 2 / math.Sqrt(21), 0},
+	}
+	for _, tc := range tests {
+		t.Run(tc.name, func(t *testing.T) {
+			t.Parallel()
+			got, err := MannKendall(tc.y)
+			if err != nil {
+				t.Fatal(err)
+			}
+			wantP := 2 * distuv.UnitNormal.Survival(math.Abs(tc.z))
+			c := tol{Abs: 1e-9, Rel: 1e-9}
+			if got.N != len(tc.y) || !c.near(got.S, tc.s) || !c.near(got.VarS, tc.varS) || !c.near(got.Z, tc.z) ||
+				!c.near(got.P, wantP) || !c.near(got.Slope, tc.slope) {
+				t.Errorf("MannKendall(%v) = %+v; want S %v, VarS %v, Z %v, P %v, slope %v",
+					tc.y, got, tc.s, tc.varS, tc.z, wantP, tc.slope)
+			}
+		})
+	}
+}
+
+// bruteMannKendall computes S and Sen's slope from every pair, the direct
+// O(n²) definition.
+func bruteMannKendall(y []float64) (s, slope float64) {
+	var slopes []float64
+	for i := range y {
+		for j := i + 1; j < len(y); j++ {
+			switch {
+			case y[j] > y[i]:
+				s++
+			case y[j] < y[i]:
+				s--
+			}
+			slopes = append(slopes, (y[j]-y[i])/float64(j-i))
+		}
+	}
+	slices.Sort(slopes)
+	m := len(slopes)
+	if m%2 == 1 {
+		return s, slopes[m/2]
+	}
+	return s, (slopes[m/2-1] + slopes[m/2]) / 2
+}
+
+// TestMannKendallAgainstPairs compares the fast counting with the direct
+// definition on random series from a fixed seed, with and without ties.
+func TestMannKendallAgainstPairs(t *testing.T) {
+	t.Parallel()
+	rng := rand.New(rand.NewPCG(5, 6))
+	for trial := range 30 {
+		n := 3 + rng.IntN(120)
+		y := make([]float64, n)
+		for i := range y {
+			y[i] = 0.3*float64(i)*rng.Float64() + 20*rng.NormFloat64()
+			if trial%3 == 0 {
+				y[i] = math.Round(y[i] / 10) // many ties
+			}
+		}
+		t.Run(fmt.Sprintf("trial%d/n%d", trial, n), func(t *testing.T) {
+			got, err := MannKendall(y)
+			if errors.Is(err, ErrConstant) {
+				return
+			}
+			if err != nil {
+				t.Fatal(err)
+			}
+			s, slope := bruteMannKendall(y)
+			spread := slices.Max(y) - slices.Min(y)
+			if got.S != s || math.Abs(got.Slope-slope) > 1e-9*spread {
+				t.Errorf("S, slope = %v, %.12g; pairs give %v, %.12g", got.S, got.Slope, s, slope)
+			}
+		})
+	}
+}
+
+func TestMannKendallErrors(t *testing.T) {
+	t.Parallel()
+	tests := []struct {
+		name  string
+		y     []float64
+		cause error
+	}{
+		{"empty", nil, ErrTooShort},
+		{"two values", []float64{1, 2}, ErrTooShort},
+		{"constant", []float64{4, 4, 4, 4}, ErrConstant},
+		{"nan", []float64{1, 2, math.NaN(), 4}, ErrNotFinite},
+		{"inf", []float64{1, 2, 3, math.Inf(1)}, ErrNotFinite},
+	}
+	for _, tc := range tests {
+		t.Run(tc.name, func(t *testing.T) {
+			t.Parallel()
+			if _, err := MannKendall(tc.y); !errors.Is(err, tc.cause) {
+				t.Errorf("MannKendall(%v): error %v, want %v", tc.y, err, tc.cause)
+			}
+		})
+	}
+}
+
+func TestMannKendallHugeValues(t *testing.T) {
+	t.Parallel()
+	// The range of these values overflows; the slope must still be right,
+	// to the search's resolution of 1e-12 of the range (4e307): every
+	// pairwise slope of this line is 1e307.
+	y := make([]float64, 5)
+	for i := range y {
+		y[i] = -1.5e308 + float64(i)*1e307
+	}
+	got, err := MannKendall(y)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if math.Abs(got.Slope-1e307) > 4e295 || got.S != 10 {
+		t.Errorf("MannKendall = %+v, want slope 1e307 and S 10", got)
+	}
+}
+
+func BenchmarkMannKendall(b *testing.B) {
+	for _, size := range benchSizes {
+		y := seasonalSeries(size.n, 12, 1)
+		b.Run(size.name, func(b *testing.B) {
+			b.ReportAllocs()
+			for b.Loop() {
+				if _, err := MannKendall(y); err != nil {
+					b.Fatal(err)
+				}
+			}
+		})
+	}
+}
