@@ -22,6 +22,9 @@ func newESWork(m int) *esWork {
 // and the initial states init, and stores its gradient in grad when grad
 // is not nil. The initial states are held fixed (their derivatives are 0).
 func (f esForm) sseGrad(y []float64, p [nConst]float64, init esStates, w *esWork, grad *[nConst]float64) float64 {
+	if grad == nil {
+		return f.sse(y, p, init, w)
+	}
 	alpha, beta, gamma, phi := p[iAlpha], p[iBeta], p[iGamma], p[iPhi]
 	l, b := init.level, init.trend
 	if !f.trend {
@@ -103,6 +106,46 @@ func (f esForm) sseGrad(y []float64, p [nConst]float64, init esStates, w *esWork
 	}
 	if grad != nil {
 		*grad = g
+	}
+	return sse
+}
+
+// sse returns the SSE alone, without derivatives (the grid search).
+func (f esForm) sse(y []float64, p [nConst]float64, init esStates, w *esWork) float64 {
+	alpha, beta, gamma, phi := p[iAlpha], p[iBeta], p[iGamma], p[iPhi]
+	l, b := init.level, init.trend
+	if !f.trend {
+		b, phi = 0, 1
+	}
+	s := w.s
+	copy(s, init.season)
+	sse := 0.0
+	j := 0
+	for _, v := range y {
+		a := l + phi*b
+		var pred, lNew float64
+		switch f.season {
+		case NoSeason:
+			pred = a
+			lNew = alpha*v + (1-alpha)*a
+		case Additive:
+			pred = a + s[j]
+			lNew = alpha*(v-s[j]) + (1-alpha)*a
+			s[j] = gamma*(v-a) + (1-gamma)*s[j]
+		case Multiplicative:
+			pred = a * s[j]
+			lNew = alpha*(v/s[j]) + (1-alpha)*a
+			s[j] = gamma*(v/a) + (1-gamma)*s[j]
+		}
+		if f.trend {
+			b = beta*(lNew-l) + (1-beta)*phi*b
+		}
+		l = lNew
+		e := v - pred
+		sse += e * e
+		if j++; j == f.m {
+			j = 0
+		}
 	}
 	return sse
 }
