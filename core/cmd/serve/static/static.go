@@ -11,27 +11,55 @@
 package static
 
 import (
+	"crypto/sha256"
+	"encoding/base64"
 	"net/http"
 	"os"
 	"path"
 	"path/filepath"
 	"regexp"
 	"strings"
+
+	"quillcast/core/chart"
 )
 
-// Policy is the Content-Security-Policy sent with every response. Scripts and
-// styles come only from the site itself; WebAssembly may be compiled;
-// connections are allowed only to the site itself (to fetch the engine and the
-// demo files); workers may come from the site or from Blob URLs.
-const Policy = "default-src 'none'; " +
-	"script-src 'self' 'wasm-unsafe-eval'; " +
-	"style-src 'self'; " +
-	"img-src 'self' data:; " +
-	"connect-src 'self'; " +
-	"worker-src 'self' blob:; " +
-	"base-uri 'none'; " +
-	"form-action 'none'; " +
-	"frame-ancestors 'none'"
+// Policy returns the Content-Security-Policy sent with every response.
+// Scripts and styles come only from the site itself, plus the one style
+// sheet every engine chart embeds, allowed by its SHA-256 hash; WebAssembly
+// may be compiled; connections go only to the site itself (to fetch the
+// engine and the demo files); workers may come from the site or from Blob
+// URLs. Nothing may be framed, posted or loaded from elsewhere.
+func Policy() string {
+	styles := "'self'"
+	for _, h := range StyleHashes() {
+		styles += " '" + h + "'"
+	}
+	return "default-src 'none'; " +
+		"script-src 'self' 'wasm-unsafe-eval'; " +
+		"style-src " + styles + "; " +
+		"img-src 'self' data:; " +
+		"connect-src 'self'; " +
+		"worker-src 'self' blob:; " +
+		"base-uri 'none'; " +
+		"form-action 'none'; " +
+		"frame-ancestors 'none'"
+}
+
+// StyleHashes returns the CSP hash sources ("sha256-…") of the inline style
+// sheets the engine writes into its SVG charts, so that charts shown inline
+// keep their look under a policy that refuses other inline styles.
+func StyleHashes() []string {
+	svg := chart.Line{Periods: []string{"2024-01", "2024-02"}, Series: []chart.Series{{Name: "x", Values: []float64{1, 2}}}}.SVG()
+	var out []string
+	for _, m := range inlineStyle.FindAllStringSubmatch(svg, -1) {
+		sum := sha256.Sum256([]byte(m[1]))
+		out = append(out, "sha256-"+base64.StdEncoding.EncodeToString(sum[:]))
+	}
+	return out
+}
+
+// inlineStyle matches a <style> element and captures its text.
+var inlineStyle = regexp.MustCompile(`(?s)<style>(.*?)</style>`)
 
 // contentTypes maps a lower-case file extension to the Content-Type sent.
 var contentTypes = map[string]string{
@@ -79,9 +107,10 @@ func CacheControl(name string) string {
 // found, so nothing but the site itself is ever listed or sent.
 func Handler(dir string) http.Handler {
 	files := http.FileServer(http.Dir(dir))
+	policy := Policy()
 	return http.HandlerFunc(func(w http.ResponseWriter, r *http.Request) {
 		h := w.Header()
-		h.Set("Content-Security-Policy", Policy)
+		h.Set("Content-Security-Policy", policy)
 		h.Set("X-Content-Type-Options", "nosniff")
 		h.Set("Referrer-Policy", "no-referrer")
 		if r.Method != http.MethodGet && r.Method != http.MethodHead {

@@ -1,0 +1,90 @@
+# Quillcast: build, serve and test the forecasting notebook.
+#
+#   make serve   build the site and serve it on http://127.0.0.1:8080/
+#   make test    every test: vet, host tests, the wasm build, wasm tests
+#                under Node, and the browser tests in Chromium
+#
+# Nothing here names a folder of a particular machine: Go's own files are
+# found with `go env GOROOT`.
+
+GO        ?= go
+GO_ROOT   := $(shell $(GO) env GOROOT)
+WASM_LIB  := $(GO_ROOT)/lib/wasm
+BUILD     := build
+SITE      := $(BUILD)/site
+ADDR      ?= 127.0.0.1
+PORT      ?= 8080
+FUZZTIME  ?= 30s
+BENCHTIME ?= 1s
+DATA      ?= testdata/demo
+FORECASTS ?= $(BUILD)/bakeoff/forecasts.csv
+SESSION   ?= testdata/sessions/demo.md
+OUT       ?= $(BUILD)/memo
+
+WASM_ENV  := GOOS=js GOARCH=wasm
+WASM_OPTS := -trimpath -ldflags='-s -w'
+
+.PHONY: all serve build test vet test-host test-wasm sizes bakeoff memo fuzz bench clean
+
+all: build
+
+## serve: build the site and serve it on $(ADDR):$(PORT)
+serve: build
+	ADDR=$(ADDR) PORT=$(PORT) $(GO) run ./core/cmd/serve -dir $(SITE)
+
+## build: the static site in build/site (page, engine, demo files)
+build:
+	rm -rf $(SITE)
+	mkdir -p $(SITE)/demo
+	cp site/*.html site/*.css site/*.js $(SITE)/
+	cp "$(WASM_LIB)/wasm_exec.js" $(SITE)/wasm_exec.js
+	$(WASM_ENV) $(GO) build $(WASM_OPTS) -o $(SITE)/quillcast.wasm ./wasm
+	for f in testdata/demo/*.csv testdata/sessions/demo.md; do \
+		if [ -f "$$f" ]; then cp "$$f" $(SITE)/demo/; fi; \
+	done
+	(cd $(SITE)/demo && ls *.csv 2>/dev/null || true) > $(SITE)/demo/files.txt
+
+## test: every test of the project
+test: vet build test-host test-wasm
+
+vet:
+	$(GO) vet ./...
+	$(WASM_ENV) $(GO) vet ./wasm/...
+
+# The host tests include the browser tests in site/browsertest, which open
+# build/site in Chromium; `build` runs first.
+test-host: build
+	$(GO) test ./...
+
+test-wasm:
+	@command -v node >/dev/null || { echo "node is needed for the wasm tests (apt-get install nodejs)"; exit 1; }
+	$(WASM_ENV) $(GO) test -exec="$(WASM_LIB)/go_js_wasm_exec" ./wasm/...
+
+## sizes: raw and gzip size of the built engine
+sizes: build
+	@raw=$$(wc -c < $(SITE)/quillcast.wasm); gz=$$(gzip -9c $(SITE)/quillcast.wasm | wc -c); \
+	echo "quillcast.wasm: $$raw bytes raw, $$gz bytes gzip -9"
+
+## bakeoff: run the bake-off over DATA and write FORECASTS
+bakeoff:
+	$(GO) run ./core/cmd/bakeoff -data $(DATA) -forecasts $(FORECASTS)
+
+## memo: run SESSION on DATA and write the memo to OUT
+memo:
+	$(GO) run ./core/cmd/memo -session $(SESSION) -data $(DATA) -out $(OUT)
+
+## fuzz: run every fuzz target for FUZZTIME each
+fuzz:
+	@set -e; for pkg in $$($(GO) list ./core/...); do \
+		for fz in $$($(GO) test -list '^Fuzz' $$pkg | grep '^Fuzz' || true); do \
+			echo "== $$pkg $$fz"; \
+			$(GO) test -run '^$$' -fuzz "^$$fz$$" -fuzztime $(FUZZTIME) $$pkg; \
+		done; \
+	done
+
+## bench: every benchmark of the engine
+bench:
+	$(GO) test -run '^$$' -bench . -benchtime $(BENCHTIME) ./core/...
+
+clean:
+	rm -rf $(BUILD)

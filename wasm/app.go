@@ -1,0 +1,25 @@
+//go:build js && wasm
+
+package main
+
+import (
+	"sync"
+	"syscall/js"
+)
+
+// app is the one value holding the engine's state in the page. Every
+// exported function is a method value captured from it; there is no
+// package-level state.
+type app struct {
+	mu sync.Mutex
+}
+
+func newApp() *app {
+	return &app{}
+}
+
+// functions returns the JavaScript functions of the API by name. They live
+// as long as the page, so they are never released.
+func (a *app) functions() map[string]js.Func {
+	return map[string]js.Func{}
+}
