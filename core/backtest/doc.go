@@ -21,8 +21,9 @@
 //     Winkler score.
 //   - [Empirical] turns the errors of a run into prediction intervals for
 //     any method.
-//   - [MovingAverageSweep] and [GridSweep] show accuracy against a
-//     parameter on training and validation at once.
+//   - [SweepMovingAverage] and [SweepGrid] show accuracy against a
+//     parameter (the moving-average width, a smoothing constant) on
+//     training and validation at once.
 //   - [Auto] is a forecast method named "auto" that ranks candidates by
 //     rolling-origin accuracy inside the training data and fits the winner.
 //

@@ -52,7 +52,7 @@ type WidthSweep struct {
 	Explanation string
 }
 
-// MovingAverageSweep scores the trailing moving average for every width in
+// SweepMovingAverage scores the trailing moving average for every width in
 // widths on the series y, training on [0, trainEnd) and validating on
 // [trainEnd, len(y)); trainEnd 0 means the whole series is training.
 //
@@ -61,7 +61,7 @@ type WidthSweep struct {
 // proportional to the series length whatever the width. It returns an
 // error when y holds a value that is not a finite number, or when the
 // widths do not leave at least one training period to forecast.
-func MovingAverageSweep(y []float64, trainEnd int, widths Range) (*WidthSweep, error) {
+func SweepMovingAverage(y []float64, trainEnd int, widths Range) (*WidthSweep, error) {
 	if err := checkFinite(y); err != nil {
 		return nil, err
 	}

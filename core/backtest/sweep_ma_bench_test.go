@@ -27,7 +27,7 @@ func BenchmarkMovingAverageSweep(b *testing.B) {
 		b.Run(fmt.Sprintf("n=%d", n), func(b *testing.B) {
 			b.ReportAllocs()
 			for b.Loop() {
-				if _, err := MovingAverageSweep(y, n-12, Range{1, 200}); err != nil {
+				if _, err := SweepMovingAverage(y, n-12, Range{1, 200}); err != nil {
 					b.Fatal(err)
 				}
 			}

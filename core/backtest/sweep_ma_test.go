@@ -48,7 +48,7 @@ func TestMovingAverageSweepNile(t *testing.T) {
 	var c maSweepCase
 	refdata.ReadJSON(t, "reference/cases/trailing_ma_sweep_nile.json", &c)
 	ws := c.Params.Widths
-	got, err := MovingAverageSweep(c.Data.Y, 0, Range{ws[0], ws[len(ws)-1]})
+	got, err := SweepMovingAverage(c.Data.Y, 0, Range{ws[0], ws[len(ws)-1]})
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -86,7 +86,7 @@ func TestMovingAverageSweepNile(t *testing.T) {
 func TestMovingAverageSweepValidation(t *testing.T) {
 	t.Parallel()
 	y := []float64{1, 2, 3, 4, 10, 12}
-	got, err := MovingAverageSweep(y, 4, Range{1, 2})
+	got, err := SweepMovingAverage(y, 4, Range{1, 2})
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -137,7 +137,7 @@ func TestMovingAverageSweepErrors(t *testing.T) {
 	}
 	for _, tt := range tests {
 		t.Run(tt.name, func(t *testing.T) {
-			_, err := MovingAverageSweep(tt.y, tt.trainEnd, tt.widths)
+			_, err := SweepMovingAverage(tt.y, tt.trainEnd, tt.widths)
 			if err == nil || !strings.Contains(err.Error(), tt.want) {
 				t.Errorf("error = %v, want one containing %q", err, tt.want)
 			}
