@@ -46,7 +46,7 @@ func (a ACF) SVG() string {
 	if a.Title != "" {
 		top = titleHeight
 	}
-	ar := area{top: top + 8, right: float64(w) - 18, bottom: float64(h) - 46}
+	ar := area{top: top + 18, right: float64(w) - 18, bottom: float64(h) - 46}
 	ax := niceAxis(vr, max(3, int(ar.height()/44)))
 	ar.left = valueAxisWidth(ax, yt)
 	p := periodAxis{n: n, ar: ar}
@@ -59,7 +59,7 @@ func (a ACF) SVG() string {
 			y := ax.y(b, ar)
 			c.line(ar.left, y, ar.right, y, stroke(holdoutSlot)+" qc-divider")
 		}
-		c.text(ar.right-4, ax.y(bound, ar)-4, "qc-muted", "end", "±"+format.Number(bound, 3))
+		c.text(ar.right, ar.top-6, "qc-muted", "end", "dashed lines at ±"+format.Number(bound, 3))
 	}
 	y0 := ax.y(0, ar)
 	bw := max(p.step()*0.45, 1)

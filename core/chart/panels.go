@@ -10,7 +10,7 @@ import (
 type Panels struct {
 	Frame
 	// Periods labels each position, as in [Line]. Height 0 in the Frame
-	// gives each panel 110 units.
+	// gives each panel 120 units.
 	Periods []string
 	// Frequency decides the period ticks; the zero value infers it.
 	Frequency Frequency
@@ -28,7 +28,7 @@ type Panel struct {
 	Bars bool
 }
 
-const panelHeight = 110.0
+const panelHeight = 120.0
 
 // SVG returns the chart as a standalone SVG document. It never fails.
 func (ps Panels) SVG() string {
@@ -67,8 +67,8 @@ func (ps Panels) SVG() string {
 		c.noData(last)
 	}
 	for i, p := range ps.Parts {
-		ar := area{left: left, top: top + float64(i)*slotH + 20, right: float64(w) - 18,
-			bottom: top + float64(i+1)*slotH - 4}
+		ar := area{left: left, top: top + float64(i)*slotH + 22, right: float64(w) - 18,
+			bottom: top + float64(i+1)*slotH - 14}
 		last = ar
 		c.text(ar.left, ar.top-6, "qc-text", "start", p.Name)
 		ax := axes[i]

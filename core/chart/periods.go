@@ -109,15 +109,16 @@ func perYear(f Frequency) int {
 var yearSteps = [...]int{1, 2, 5, 10, 20, 25, 50, 100, 200, 500, 1000}
 
 // periodTicks chooses at most maxTicks labelled positions (at least 2 are
-// allowed) among labels. Over several years it marks the first period of
-// each year (or of every 2nd, 5th, … year) and shows the year; over a
-// shorter span it marks quarters or months; otherwise it thins evenly.
+// allowed) among labels. Over three years or more it marks the first period
+// of each year (or of every 2nd, 5th, … year) and shows the year; monthly
+// data over a shorter span get every month, 2nd, 3rd or 6th month from
+// January; anything else is thinned evenly.
 func periodTicks(labels []string, f Frequency, maxTicks int) []tick {
 	maxTicks = max(maxTicks, 2)
 	if f == Inferred {
 		f = inferFrequency(labels)
 	}
-	if f != Unlabelled && f != Yearly && len(labels) >= 2*perYear(f) {
+	if f != Unlabelled && f != Yearly && len(labels) >= 3*perYear(f) {
 		if t := yearTicks(labels, f, maxTicks); len(t) >= 2 {
 			return t
 		}
