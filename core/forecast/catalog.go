@@ -69,6 +69,7 @@ func Catalog() []Spec {
 		holtSpec(),
 		dampedSpec(),
 		holtWintersSpec(),
+		regressionSpec(),
 	}
 	for i := range specs {
 		specs[i].New = checked(specs[i])

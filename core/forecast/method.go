@@ -57,6 +57,9 @@ type Fit struct {
 	// Components holds the state paths after each period, length N, for
 	// methods with states: "level", "trend", "season". Nil otherwise.
 	Components map[string][]float64
+	// Stats holds further fitted statistics where the method has them,
+	// such as "r2", "residual-se" and standard errors "se(trend)".
+	Stats []Param
 	// Evaluations counts evaluations of the in-sample error made while
 	// estimating parameters; 0 when nothing was estimated.
 	Evaluations int
