@@ -8,16 +8,16 @@ package series
 type shape uint8
 
 const (
-	shapeNone  shape = iota // not a date
-	shapeYMD                // 2024-03-01, 2024/03/01
-	shapeYM                 // 2024-03, 2024/03
-	shapeYQ                 // 2024-Q1, 2024Q1, Q1 2024
-	shapeYW                 // 2024-W05, 2024W05
-	shapeY                  // 2024
-	shapeMY                 // 03/2024, 3-2024
-	shapeAB                 // 01/02/2024: day-first or month-first
-	shapeMonY               // Mar 2024, March 2024, Mar-2024
-	shapeInt                // 17: a plain position
+	shapeNone shape = iota // not a date
+	shapeYMD               // 2024-03-01, 2024/03/01
+	shapeYM                // 2024-03, 2024/03
+	shapeYQ                // 2024-Q1, 2024Q1, Q1 2024
+	shapeYW                // 2024-W05, 2024W05
+	shapeY                 // 2024
+	shapeMY                // 03/2024, 3-2024
+	shapeAB                // 01/02/2024: day-first or month-first
+	shapeMonY              // Mar 2024, March 2024, Mar-2024
+	shapeInt               // 17: a plain position
 )
 
 // shapeNames describe shapes in decisions and messages.
@@ -37,10 +37,16 @@ var shapeNames = [...]string{
 // dateCell is one date cell taken apart. For shapeAB, a and b are the first
 // and second numbers, whose roles the column decides.
 type dateCell struct {
+	year    int32 // the year; the position itself for shapeInt
+	a, b    uint8 // month and day (YMD), month (YM, MY, MonY), quarter, week, or the two leading numbers of AB
 	shape   shape
-	year    int
-	a, b    int  // month and day (YMD), month (YM, MY, MonY), quarter, week, or the two leading numbers of AB
 	hasTime bool // a time of day follows the date
+}
+
+// cellOf packs the parts of a date cell; parts were range-checked by the
+// caller.
+func cellOf(s shape, year, a, b int) dateCell {
+	return dateCell{year: int32(year), a: uint8(a), b: uint8(b), shape: s}
 }
 
 // monthNames holds English month names and their usual abbreviations,
@@ -83,10 +89,10 @@ func scanDate(b []byte) dateCell {
 	}
 	if i == len(b) {
 		if n1 == 4 {
-			return dateCell{shape: shapeY, year: v1}
+			return cellOf(shapeY, v1, 0, 0)
 		}
 		if n1 <= 9 && (n1 == 1 || b[0] != '0') {
-			return dateCell{shape: shapeInt, year: v1}
+			return cellOf(shapeInt, v1, 0, 0)
 		}
 		return dateCell{}
 	}
@@ -100,7 +106,7 @@ func scanDate(b []byte) dateCell {
 	v2, n2, j := digits(b, i+1)
 	if n2 == 4 && j == len(b) {
 		if v1 >= 1 && v1 <= 12 {
-			return dateCell{shape: shapeMY, year: v2, a: v1}
+			return cellOf(shapeMY, v2, v1, 0)
 		}
 		return dateCell{}
 	}
@@ -111,7 +117,7 @@ func scanDate(b []byte) dateCell {
 	if n3 != 4 || v1 < 1 || v2 < 1 || v1 > 31 || v2 > 31 || (v1 > 12 && v2 > 12) {
 		return dateCell{}
 	}
-	c := dateCell{shape: shapeAB, year: y, a: v1, b: v2}
+	c := cellOf(shapeAB, y, v1, v2)
 	return withTime(c, b, k)
 }
 
@@ -130,13 +136,13 @@ func scanYearFirst(b []byte, y, i int) dateCell {
 	switch c | 0x20 {
 	case 'q':
 		if i+2 == len(b) && b[i+1] >= '1' && b[i+1] <= '4' {
-			return dateCell{shape: shapeYQ, year: y, a: int(b[i+1] - '0')}
+			return cellOf(shapeYQ, y, int(b[i+1]-'0'), 0)
 		}
 		return dateCell{}
 	case 'w':
 		w, n, j := digits(b, i+1)
 		if n == 2 && j == len(b) && w >= 1 && w <= 53 {
-			return dateCell{shape: shapeYW, year: y, a: w}
+			return cellOf(shapeYW, y, w, 0)
 		}
 		return dateCell{}
 	}
@@ -148,7 +154,7 @@ func scanYearFirst(b []byte, y, i int) dateCell {
 		return dateCell{}
 	}
 	if j == len(b) {
-		return dateCell{shape: shapeYM, year: y, a: m}
+		return cellOf(shapeYM, y, m, 0)
 	}
 	if b[j] != c {
 		return dateCell{}
@@ -157,7 +163,7 @@ func scanYearFirst(b []byte, y, i int) dateCell {
 	if n == 0 || n > 2 || d < 1 || d > 31 {
 		return dateCell{}
 	}
-	return withTime(dateCell{shape: shapeYMD, year: y, a: m, b: d}, b, k)
+	return withTime(cellOf(shapeYMD, y, m, d), b, k)
 }
 
 // scanLetterFirst handles "Q1 2024", "Mar 2024", "March 2024", "Mar-2024".
@@ -165,7 +171,7 @@ func scanLetterFirst(b []byte) dateCell {
 	if b[0]|0x20 == 'q' && len(b) >= 7 && b[1] >= '1' && b[1] <= '4' && (b[2] == ' ' || b[2] == '-' || b[2] == '/') {
 		y, n, j := digits(b, 3)
 		if n == 4 && j == len(b) {
-			return dateCell{shape: shapeYQ, year: y, a: int(b[1] - '0')}
+			return cellOf(shapeYQ, y, int(b[1]-'0'), 0)
 		}
 		return dateCell{}
 	}
@@ -187,7 +193,7 @@ func scanLetterFirst(b []byte) dateCell {
 	if n != 4 || j != len(b) {
 		return dateCell{}
 	}
-	return dateCell{shape: shapeMonY, year: y, a: m}
+	return cellOf(shapeMonY, y, m, 0)
 }
 
 // monthNumber returns 1..12 for an English month name or abbreviation in

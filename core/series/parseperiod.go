@@ -39,10 +39,11 @@ func (e *PeriodError) Unwrap() error { return ErrNotPeriod }
 // [ErrNotPeriod].
 func ParsePeriod(text string) (Period, error) {
 	b := []byte(strings.TrimSpace(text))
-	c := scanDate(b)
-	switch c.shape {
+	d := scanDate(b)
+	c := struct{ year, a, b int }{int(d.year), int(d.a), int(d.b)}
+	switch d.shape {
 	case shapeYMD:
-		if c.hasTime {
+		if d.hasTime {
 			return Period{}, &PeriodError{text, "a period has no time of day; write the day alone, as in 2024-03-01"}
 		}
 		if c.b > daysIn(c.year, c.a) {

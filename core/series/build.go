@@ -1,0 +1,321 @@
+package series
+
+import (
+	"fmt"
+	"math"
+	"slices"
+	"strings"
+)
+
+// maxPerKind caps the problems listed one by one for each series and kind;
+// the rest are counted in one closing problem.
+const maxPerKind = 10
+
+// builder places the rows of one series at their periods.
+type builder struct {
+	r    *reader
+	name string    // series name
+	freq Frequency // frequency of ords
+	idx  []int32   // the series' rows, as indices into r.rows, in file order
+	ords []int     // period ordinal per data row; nil to number rows 1, 2, 3, ...
+	vals []float64 // value per data row
+	col  int       // the value column
+
+	s     *Series
+	at    []int32          // at[slot] = 1 + position in idx of the first row at slot; 0 when none
+	dups  map[int][]int32  // slot -> positions in idx of every row at slot, when more than one
+	kinds map[error]int    // problems listed so far, by cause
+	more  map[error][2]int // problems not listed: count and first line
+}
+
+// ord returns the period ordinal of the k-th row of the series.
+func (b *builder) ord(k int) int {
+	if b.ords == nil {
+		return k + 1
+	}
+	return b.ords[b.idx[k]]
+}
+
+// line returns the file line of the k-th row of the series.
+func (b *builder) line(k int) int { return b.r.lineOf(int(b.idx[k])) }
+
+// build returns the series (nil when it has no value) and its labels.
+func (b *builder) build(labelCols []int) (*Series, []Label) {
+	r := b.r
+	lo, hi, first := 0, 0, true
+	for k := range b.idx {
+		if math.IsNaN(b.vals[b.idx[k]]) {
+			continue
+		}
+		o := b.ord(k)
+		if first || o < lo {
+			lo = o
+		}
+		if first || o > hi {
+			hi = o
+		}
+		first = false
+	}
+	if first {
+		r.decide("series %q has no values and is left out", b.name)
+		return nil, nil
+	}
+	if hi-lo >= maxSpan {
+		r.spanError(b.name, Period{b.freq, lo}, Period{b.freq, hi})
+		return nil, nil
+	}
+	n := hi - lo + 1
+	b.s = &Series{Name: b.name, Start: Period{b.freq, lo}, Values: make([]float64, n), Season: b.freq.DefaultSeason()}
+	for i := range b.s.Values {
+		b.s.Values[i] = math.NaN()
+	}
+	b.at = make([]int32, n)
+	outside := 0
+	var late [][2]int // out-of-order rows: position in idx, position of the latest row before it
+	maxK := -1
+	for k := range b.idx {
+		o := b.ord(k)
+		if o < lo || o > hi {
+			outside++
+			continue
+		}
+		if maxK >= 0 && o < b.ord(maxK) {
+			late = append(late, [2]int{k, maxK})
+		} else {
+			maxK = k
+		}
+		slot := o - lo
+		if b.at[slot] == 0 {
+			b.at[slot] = int32(k + 1)
+			b.s.Values[slot] = b.vals[b.idx[k]]
+			continue
+		}
+		if b.dups == nil {
+			b.dups = map[int][]int32{}
+		}
+		if b.dups[slot] == nil {
+			b.dups[slot] = []int32{b.at[slot] - 1}
+		}
+		b.dups[slot] = append(b.dups[slot], int32(k))
+	}
+	if outside > 0 {
+		r.decide("series %q: %d %s without a value before its first value or after its last %s left out",
+			b.name, outside, plural(outside, "row", "rows"), plural(outside, "is", "are"))
+	}
+	b.duplicates()
+	b.order(late)
+	if f := r.opt.Fill; f != NoFill {
+		changes, err := Fill(b.s, f)
+		if err != nil {
+			r.errs = append(r.errs, err.(*ParseError))
+			return nil, nil
+		}
+		r.ds.Changes = append(r.ds.Changes, changes...)
+	}
+	b.missing()
+	b.closeProblems()
+	return b.s, b.labels(labelCols)
+}
+
+// duplicates combines or reports several rows for one period.
+func (b *builder) duplicates() {
+	if len(b.dups) == 0 {
+		return
+	}
+	r := b.r
+	slots := make([]int, 0, len(b.dups))
+	for slot := range b.dups {
+		slots = append(slots, slot)
+	}
+	slices.Sort(slots)
+	for _, slot := range slots {
+		ks := b.dups[slot]
+		p := b.s.PeriodAt(slot)
+		lines := make([]int, len(ks))
+		old := make([]float64, len(ks))
+		sum, count := 0.0, 0
+		for i, k := range ks {
+			lines[i] = b.line(int(k))
+			old[i] = b.vals[b.idx[k]]
+			if !math.IsNaN(old[i]) {
+				sum += old[i]
+				count++
+			}
+		}
+		agg := r.opt.Duplicates
+		if agg == KeepDuplicates {
+			b.s.Values[slot] = math.NaN()
+			b.problem(Problem{Err: ErrDuplicate, Line: lines[1], Column: b.col + 1, Name: r.names[b.col], Period: p, Count: 1, Blocking: true,
+				Message: fmt.Sprintf("line %d: %s appears again in series %q (first on line %d); the values are %s", lines[1], p, b.name, lines[0], valueList(old)),
+				Fix:     "delete the extra rows, or set duplicates to sum or mean"})
+			continue
+		}
+		v := math.NaN()
+		if count > 0 {
+			v = sum
+			if agg == Mean {
+				v = sum / float64(count)
+			}
+		}
+		b.s.Values[slot] = v
+		r.ds.Changes = append(r.ds.Changes, Change{Series: b.name, Period: p, Lines: lines, Old: old, New: v,
+			Text: fmt.Sprintf("%s in series %q: lines %s (%s) combined by %s into %s", p, b.name, lineList(lines), valueList(old), agg, formatValue(v))})
+	}
+}
+
+// order reports or records rows that come after a later period.
+func (b *builder) order(late [][2]int) {
+	r := b.r
+	for _, pair := range late {
+		k, before := pair[0], pair[1]
+		p, q := Period{b.freq, b.ord(k)}, Period{b.freq, b.ord(before)}
+		if r.opt.Sort {
+			r.ds.Changes = append(r.ds.Changes, Change{Series: b.name, Period: p, Lines: []int{b.line(k)}, Old: []float64{b.vals[b.idx[k]]}, New: b.vals[b.idx[k]],
+				Text: fmt.Sprintf("line %d (%s) placed at its period in series %q, before line %d (%s)", b.line(k), p, b.name, b.line(before), q)})
+			continue
+		}
+		b.problem(Problem{Err: ErrOutOfOrder, Line: b.line(k), Period: p, Count: 1, Blocking: true,
+			Message: fmt.Sprintf("line %d: %s comes after %s (line %d) in series %q", b.line(k), p, q, b.line(before), b.name),
+			Fix:     "sort the rows by period, or set sort to place each row at its period"})
+	}
+}
+
+// missing reports the values still missing: cells marked missing and
+// periods without a row.
+func (b *builder) missing() {
+	r := b.r
+	v := b.s.Values
+	for i := 0; i < len(v); i++ {
+		if !math.IsNaN(v[i]) || b.dups[i] != nil {
+			continue
+		}
+		if b.at[i] != 0 {
+			k := int(b.at[i] - 1)
+			cell := string(trimCell(r.t.cell(int(r.rows[b.idx[k]]), b.col)))
+			b.problem(Problem{Err: ErrMissing, Line: b.line(k), Column: b.col + 1, Name: r.names[b.col], Cell: cell, Period: b.s.PeriodAt(i), Count: 1,
+				Message: fmt.Sprintf("line %d, column %q: series %q has no value for %s (the cell holds %s)", b.line(k), r.names[b.col], b.name, b.s.PeriodAt(i), quoteCell(cell)),
+				Fix:     "fill in the value, or set fill to carry forward, linear or seasonal"})
+			continue
+		}
+		j := i
+		for j+1 < len(v) && b.at[j+1] == 0 && math.IsNaN(v[j+1]) {
+			j++
+		}
+		runs := j - i + 1
+		what := fmt.Sprintf("no row for %s", b.s.PeriodAt(i))
+		if runs > 1 {
+			what = fmt.Sprintf("no rows for %s to %s (%d %s)", b.s.PeriodAt(i), b.s.PeriodAt(j), runs, b.freq.Plural())
+		}
+		where := ""
+		if i > 0 && j+1 < len(v) && b.at[i-1] != 0 && b.at[j+1] != 0 {
+			where = fmt.Sprintf(", between line %d and line %d", b.line(int(b.at[i-1]-1)), b.line(int(b.at[j+1]-1)))
+		}
+		b.problem(Problem{Err: ErrGap, Period: b.s.PeriodAt(i), Count: runs,
+			Message: fmt.Sprintf("series %q has %s%s", b.name, what, where),
+			Fix:     "add the missing rows, or set fill to carry forward, linear or seasonal"})
+		i = j
+	}
+}
+
+// problem lists p, or counts it once maxPerKind of its kind are listed.
+func (b *builder) problem(p Problem) {
+	p.Series = b.name
+	if b.kinds == nil {
+		b.kinds = map[error]int{}
+		b.more = map[error][2]int{}
+	}
+	if b.kinds[p.Err] < maxPerKind {
+		b.kinds[p.Err]++
+		b.r.ds.Problems = append(b.r.ds.Problems, p)
+		return
+	}
+	m := b.more[p.Err]
+	if m[0] == 0 {
+		m[1] = p.Line
+	}
+	m[0] += max(p.Count, 1)
+	b.more[p.Err] = m
+}
+
+// closeProblems adds one problem counting those not listed, per kind.
+func (b *builder) closeProblems() {
+	for _, cause := range []error{ErrDuplicate, ErrOutOfOrder, ErrMissing, ErrGap} {
+		m, ok := b.more[cause]
+		if !ok {
+			continue
+		}
+		what := map[error]string{ErrDuplicate: "duplicate periods", ErrOutOfOrder: "rows out of order", ErrMissing: "missing values", ErrGap: "periods without a row"}[cause]
+		b.r.ds.Problems = append(b.r.ds.Problems, Problem{Err: cause, Series: b.name, Line: m[1], Count: m[0],
+			Blocking: cause == ErrDuplicate || cause == ErrOutOfOrder,
+			Message:  fmt.Sprintf("series %q has %d more %s after the %d listed", b.name, m[0], what, maxPerKind),
+			Fix:      "see the rows listed above for what to do"})
+	}
+}
+
+// labels returns the text of the label columns at each period.
+func (b *builder) labels(cols []int) []Label {
+	if len(cols) == 0 {
+		return nil
+	}
+	r := b.r
+	out := make([]Label, len(cols))
+	for j, c := range cols {
+		intern := map[string]string{}
+		text := make([]string, len(b.s.Values))
+		for slot, at := range b.at {
+			if at == 0 {
+				continue
+			}
+			cell := trimCell(r.t.cell(int(r.rows[b.idx[at-1]]), c))
+			s, ok := intern[string(cell)]
+			if !ok {
+				s = string(cell)
+				if len(intern) < 256 {
+					intern[s] = s
+				}
+			}
+			text[slot] = s
+		}
+		out[j] = Label{Column: r.names[c], Text: text}
+	}
+	return out
+}
+
+// valueList writes values as "120, 125 and 130".
+func valueList(v []float64) string {
+	s := make([]string, 0, min(len(v), 5))
+	for i, x := range v {
+		if i == 4 && len(v) > 5 {
+			return strings.Join(s, ", ") + fmt.Sprintf(" and %d more", len(v)-4)
+		}
+		s = append(s, formatValue(x))
+	}
+	return andList(s)
+}
+
+// lineList writes line numbers as "12, 14 and 15".
+func lineList(lines []int) string {
+	s := make([]string, 0, min(len(lines), 5))
+	for i, l := range lines {
+		if i == 4 && len(lines) > 5 {
+			return strings.Join(s, ", ") + fmt.Sprintf(" and %d more", len(lines)-4)
+		}
+		s = append(s, fmt.Sprint(l))
+	}
+	return andList(s)
+}
+
+// andList joins words as "a, b and c".
+func andList(s []string) string {
+	switch len(s) {
+	case 0:
+		return ""
+	case 1:
+		return s[0]
+	}
+	out := s[0]
+	for _, w := range s[1 : len(s)-1] {
+		out += ", " + w
+	}
+	return out + " and " + s[len(s)-1]
+}
