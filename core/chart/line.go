@@ -108,4 +108,3 @@ func finite(v float64) bool { return !math.IsNaN(v) && !math.IsInf(v, 0) }
 func addUpTo(r *valueRange, vs []float64, n int) {
 	r.addAll(vs[:min(len(vs), n)])
 }
-

@@ -194,4 +194,3 @@ func drawSeriesLine(c *canvas, p periodAxis, ax axis, s Series, slot int, marker
 		k++
 	}
 }
-
