@@ -2,6 +2,12 @@
 
 package main
 
+import (
+	"errors"
+
+	"quillcast/core/series"
+)
+
 // Failure is an error as the page receives it: a message in plain words and,
 // when the error points into a session text or a data file, its place so the
 // page can mark the spot. Line and Column count from 1; 0 means unknown.
@@ -17,5 +23,19 @@ type Failure struct {
 // failureOf turns an error into the data the page shows.
 func failureOf(err error) Failure {
 	f := Failure{Message: err.Error()}
+	var list series.ErrorList
+	if errors.As(err, &list) {
+		for _, e := range list {
+			f.Problems = append(f.Problems, failureOf(e))
+		}
+		if len(f.Problems) > 0 {
+			f.Line, f.Column = f.Problems[0].Line, f.Problems[0].Column
+		}
+		return f
+	}
+	var pe *series.ParseError
+	if errors.As(err, &pe) {
+		f.Line, f.Column = pe.Line, pe.Column
+	}
 	return f
 }
