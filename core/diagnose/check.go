@@ -1,0 +1,201 @@
+package diagnose
+
+import (
+	"fmt"
+	"math"
+	"strings"
+)
+
+// Assumes states what a forecasting method takes for granted about a
+// series, so that [Check] can say when the data contradict it. The zero
+// value assumes nothing.
+type Assumes struct {
+	// Name is the method as the reader should meet it mid-sentence, for
+	// example "a moving average" or "simple exponential smoothing"; empty
+	// means "this method".
+	Name     string
+	NoTrend  bool // the method cannot follow a trend (mean, naive, moving average, simple smoothing)
+	NoSeason bool // the method cannot follow a season
+	Positive bool // the method needs values above zero (a multiplicative season, a log scale)
+}
+
+func (a Assumes) name() string {
+	if a.Name == "" {
+		return "this method"
+	}
+	return a.Name
+}
+
+// Check tests a series for what forecasting methods commonly assume and
+// returns its findings in a fixed order: gaps, a constant series, zero or
+// negative values, trend, season. A finding is a [Warning] when the data
+// contradict assumes, an [Info] otherwise.
+//
+// The trend test is [MannKendall] on the finite values; the season checks
+// (for season of 2 or more, on more than two full seasons without gaps) are
+// [SeasonalityTest] at lag season and [SeasonalStrength] of the additive
+// [Decompose]. A test counts as evidence when its p-value is below
+// [Significance]. Check never fails: what it cannot test it says, with the
+// reason.
+func Check(y []float64, season int, assumes Assumes) []Finding {
+	var out []Finding
+	finite := make([]float64, 0, len(y))
+	gaps, firstGap := 0, 0
+	for i, v := range y {
+		if isFinite(v) {
+			finite = append(finite, v)
+			continue
+		}
+		if gaps == 0 {
+			firstGap = i + 1
+		}
+		gaps++
+	}
+	if gaps > 0 {
+		out = append(out, Finding{Severity: Warning, Topic: TopicGaps,
+			Text: fmt.Sprintf("The series has %s with no usable number (the first at period %d): the checks below leave %s out, and the season is not checked.",
+				counted(gaps, "period", "periods"), firstGap, plural(gaps, "it", "them")),
+			Evidence: fmt.Sprintf("%d of %d periods are missing or infinite", gaps, len(y))})
+	}
+	if len(finite) == 0 {
+		return append(out, Finding{Severity: Info, Topic: TopicLength,
+			Text:     "The series has no values to check.",
+			Evidence: fmt.Sprintf("n = %d", len(y))})
+	}
+	if c, ok := constantValue(finite); ok {
+		return append(out, Finding{Severity: Info, Topic: TopicConstant,
+			Text:     fmt.Sprintf("The series is constant (every value is %s): it has no trend or season to follow, and MASE cannot be scaled on it.", num(c)),
+			Evidence: fmt.Sprintf("n = %d, all values equal", len(finite))})
+	}
+	if f, ok := signFinding(finite, assumes); ok {
+		out = append(out, f)
+	}
+	out = append(out, trendFinding(finite, assumes))
+	if season >= 2 && gaps == 0 {
+		out = append(out, seasonFinding(y, season, assumes))
+	}
+	return out
+}
+
+// constantValue reports whether every value of y equals the first.
+func constantValue(y []float64) (float64, bool) {
+	for _, v := range y[1:] {
+		if v != y[0] {
+			return 0, false
+		}
+	}
+	return y[0], true
+}
+
+func signFinding(y []float64, assumes Assumes) (Finding, bool) {
+	zeros, negatives := 0, 0
+	for _, v := range y {
+		switch {
+		case v == 0:
+			zeros++
+		case v < 0:
+			negatives++
+		}
+	}
+	if zeros+negatives == 0 {
+		return Finding{}, false
+	}
+	var parts []string
+	if negatives > 0 {
+		parts = append(parts, counted(negatives, "negative value", "negative values"))
+	}
+	if zeros > 0 {
+		parts = append(parts, counted(zeros, "zero value", "zero values"))
+	}
+	what := strings.Join(parts, " and ")
+	f := Finding{Severity: Info, Topic: TopicSign,
+		Evidence: fmt.Sprintf("%d zero and %d negative of %d values", zeros, negatives, len(y))}
+	mape := ""
+	if zeros > 0 {
+		mape = " MAPE and MPE are undefined for any period whose actual value is zero."
+	}
+	if assumes.Positive {
+		f.Severity = Warning
+		f.Text = fmt.Sprintf("The series has %s: %s needs values above zero and cannot be used on it.%s", what, assumes.name(), mape)
+	} else {
+		f.Text = fmt.Sprintf("The series has %s: a multiplicative season cannot be used.%s", what, mape)
+	}
+	return f, true
+}
+
+func trendFinding(y []float64, assumes Assumes) Finding {
+	mk, err := MannKendall(y)
+	if err != nil {
+		return Finding{Severity: Info, Topic: TopicTrend,
+			Text:     fmt.Sprintf("The trend could not be tested: %s.", strings.TrimSuffix(err.Error(), ".")),
+			Evidence: fmt.Sprintf("n = %d", len(y))}
+	}
+	evidence := fmt.Sprintf("Mann-Kendall S = %.0f, Z = %s, %s, n = %d; Sen's slope %s a period",
+		mk.S, num(mk.Z), formatP(mk.P), mk.N, num(mk.Slope))
+	if mk.N < 10 {
+		evidence += " (fewer than 10 values: the p-value is rough)"
+	}
+	if !(mk.P < Significance) || mk.Slope == 0 {
+		return Finding{Severity: Info, Topic: TopicTrend,
+			Text:     fmt.Sprintf("The series shows no clear trend (Mann-Kendall %s).", formatP(mk.P)),
+			Evidence: evidence}
+	}
+	verb, miss := "rises", "under-forecast"
+	if mk.Slope < 0 {
+		verb, miss = "falls", "over-forecast"
+	}
+	size := rough(math.Abs(mk.Slope))
+	if level := meanOf(y); allPositive(y) && level > 0 {
+		size = rough(100*math.Abs(mk.Slope)/level) + "%"
+	}
+	text := fmt.Sprintf("The series %s by about %s a period (Mann-Kendall %s)", verb, size, formatP(mk.P))
+	if assumes.NoTrend {
+		return Finding{Severity: Warning, Topic: TopicTrend, Evidence: evidence,
+			Text: fmt.Sprintf("%s: %s assumes no trend, lags behind it and will %s.", text, assumes.name(), miss)}
+	}
+	return Finding{Severity: Info, Topic: TopicTrend, Text: text + ".", Evidence: evidence}
+}
+
+func seasonFinding(y []float64, season int, assumes Assumes) Finding {
+	if len(y) <= 2*season {
+		return Finding{Severity: Info, Topic: TopicSeason,
+			Text: fmt.Sprintf("The series is too short to check a season of %d periods: that needs more than two full seasons (%d values); it has %d.",
+				season, 2*season+1, len(y)),
+			Evidence: fmt.Sprintf("n = %d, season %d", len(y), season)}
+	}
+	seasonal, stat := SeasonalityTest(y, season)
+	var strength float64
+	if d, err := Decompose(y, season, Additive); err == nil {
+		strength = SeasonalStrength(d)
+	}
+	evidence := fmt.Sprintf("seasonality test at lag %d: |r_%d| is %s times its 90%% bound; seasonal strength %.2f (classical additive decomposition), n = %d",
+		season, season, num(stat), strength, len(y))
+	if !seasonal {
+		return Finding{Severity: Info, Topic: TopicSeason, Evidence: evidence,
+			Text: fmt.Sprintf("The series shows no clear pattern repeating every %d periods (seasonal strength %.2f).", season, strength)}
+	}
+	text := fmt.Sprintf("A pattern repeating every %d periods accounts for %s of the variation around the trend (seasonal strength %.2f)",
+		season, percent(strength), strength)
+	if assumes.NoSeason {
+		return Finding{Severity: Warning, Topic: TopicSeason, Evidence: evidence,
+			Text: fmt.Sprintf("%s: %s cannot follow a season and will miss its peaks and troughs.", text, assumes.name())}
+	}
+	return Finding{Severity: Info, Topic: TopicSeason, Text: text + ".", Evidence: evidence}
+}
+
+func meanOf(y []float64) float64 {
+	var s float64
+	for _, v := range y {
+		s += v
+	}
+	return s / float64(len(y))
+}
+
+func allPositive(y []float64) bool {
+	for _, v := range y {
+		if !(v > 0) {
+			return false
+		}
+	}
+	return true
+}
