@@ -1,0 +1,74 @@
+package memo
+
+import (
+	"fmt"
+	"strings"
+)
+
+// Exhibit is a numbered table or chart of the memo.
+type Exhibit struct {
+	// Number counts tables and charts together from 1 in reading order.
+	Number  int
+	Caption string
+	// Section and Block locate the exhibit: m.Sections[Section].Blocks[Block].
+	Section, Block int
+	// File is the chart's path inside the zip ("charts/03-errors.svg"); ""
+	// for a table.
+	File string
+}
+
+// Exhibits returns the memo's tables and charts numbered in reading order.
+func (m Memo) Exhibits() []Exhibit {
+	var out []Exhibit
+	for si, s := range m.Sections {
+		for bi, b := range s.Blocks {
+			switch b := b.(type) {
+			case Table:
+				out = append(out, Exhibit{Number: len(out) + 1, Caption: b.Caption, Section: si, Block: bi})
+			case Chart:
+				n := len(out) + 1
+				out = append(out, Exhibit{Number: n, Caption: b.Caption, Section: si, Block: bi, File: chartFile(n, b.Stem)})
+			}
+		}
+	}
+	return out
+}
+
+// ExhibitTitle returns "Exhibit n — caption", or "Exhibit n" when the
+// caption is empty.
+func ExhibitTitle(n int, caption string) string {
+	if strings.TrimSpace(caption) == "" {
+		return fmt.Sprintf("Exhibit %d", n)
+	}
+	return fmt.Sprintf("Exhibit %d — %s", n, caption)
+}
+
+// chartFile returns the zip path of chart exhibit n.
+func chartFile(n int, stem string) string {
+	return fmt.Sprintf("charts/%02d-%s.svg", n, cleanStem(stem))
+}
+
+// cleanStem keeps a-z and 0-9 (upper case lowered), turns runs of anything
+// else into one hyphen, trims hyphens and cuts to 40 bytes.
+func cleanStem(stem string) string {
+	var b strings.Builder
+	hyphen := false
+	for _, r := range strings.ToLower(stem) {
+		if (r >= 'a' && r <= 'z') || (r >= '0' && r <= '9') {
+			if hyphen && b.Len() > 0 {
+				b.WriteByte('-')
+			}
+			hyphen = false
+			b.WriteRune(r)
+			if b.Len() >= 40 {
+				break
+			}
+			continue
+		}
+		hyphen = true
+	}
+	if b.Len() == 0 {
+		return "chart"
+	}
+	return b.String()
+}
