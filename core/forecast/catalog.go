@@ -70,6 +70,8 @@ func Catalog() []Spec {
 		dampedSpec(),
 		holtWintersSpec(),
 		regressionSpec(),
+		thetaSpec(),
+		naive2Spec(),
 	}
 	for i := range specs {
 		specs[i].New = checked(specs[i])
