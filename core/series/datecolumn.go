@@ -67,7 +67,12 @@ func (r *reader) dateColumn(c int) (Frequency, []int) {
 		}
 	}
 	if written == NoFrequency {
-		r.fail(-1, c, "", ErrNotDate, fmt.Sprintf("column %q holds no periods; name the period column with the date option", name))
+		for i, row := range r.rows {
+			if b := trimCell(r.t.cell(int(row), c)); !isMissing(b, r.opt.Missing) {
+				r.fail(i, c, string(b), ErrNotDate, fmt.Sprintf("%s is not a period, and no cell of the column is; write periods as 2024-03-01, 2024-W05, 2024-03, 2024-Q1 or 2024, or choose another period column", quoteCell(string(b))))
+				break
+			}
+		}
 		return NoFrequency, nil
 	}
 	example := shapeNames[cells[firstOf[written]].shape]

@@ -52,7 +52,7 @@ func (r *reader) frequency(c int, written Frequency, ords []int) Frequency {
 			return want
 		}
 		if !coarser(written, want) {
-			r.fail(-1, c, "", ErrOption, fmt.Sprintf("the column holds %s, which cannot be read as %s; set the frequency to %s or leave it to be found",
+			r.fail(-1, c, "", ErrOption, fmt.Sprintf("it holds %s, which cannot be read as %s; set the frequency to %s or leave it to be found",
 				written.Plural(), want.Plural(), written))
 			return NoFrequency
 		}

@@ -229,6 +229,9 @@ func letterHint(b []byte) string {
 			hasDigit = true
 		}
 	}
+	if len(b) > 0 && b[0] == '#' {
+		return "a spreadsheet error code; fix the formula in the sheet"
+	}
 	if hasDigit {
 		for _, c := range b {
 			switch c {
@@ -238,9 +241,6 @@ func letterHint(b []byte) string {
 				return "a letter l instead of a one?"
 			}
 		}
-	}
-	if len(b) > 0 && b[0] == '#' {
-		return "a spreadsheet error code; fix the formula in the sheet"
 	}
 	if !utf8.Valid(b) {
 		return "characters that are not UTF-8 text; save the file as UTF-8"
@@ -295,6 +295,9 @@ func (nb *number) markEvidence() evidence {
 // 1,23,456.7), before any decimal mark.
 func (nb *number) value(dec byte) (float64, string) {
 	if !nb.ok {
+		if nb.bad == "" {
+			return 0, "text"
+		}
 		return 0, nb.bad
 	}
 	var out [64]byte

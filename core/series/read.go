@@ -63,7 +63,7 @@ func (r *reader) read(data []byte) {
 		r.decide("cells are separated by %s", delimiterName(delim))
 	case ',', ';', '\t', '|':
 	default:
-		r.fail(-1, -1, "", ErrOption, fmt.Sprintf("%q cannot separate cells; choose a comma, semicolon, tab or vertical bar", delim))
+		r.fail(-1, -1, "", ErrOption, fmt.Sprintf("%q cannot separate cells; choose a comma, semicolon, tab or vertical bar", string(rune(delim))))
 		return
 	}
 	r.delim = delim

@@ -72,6 +72,13 @@ func (r *reader) chooseRoles(st []colStats) (roles, bool) {
 			return ro, true
 		}
 	}
+	// A column named for dates that holds none: read it to report why.
+	for c, name := range r.names {
+		if hinted(name, dateNames) && st[c].present() > 0 && !st[c].numeric() {
+			ro.date = c
+			return ro, true
+		}
+	}
 	return ro, true
 }
 
@@ -128,7 +135,7 @@ func (r *reader) combined(ro roles) (Frequency, []int) {
 	r.decide("columns %q and %q together give the periods, read as %s", r.names[ro.year], r.names[ro.sub], ro.subOf.Plural())
 	if want := r.opt.Frequency; want != NoFrequency && want != ro.subOf {
 		if !coarser(ro.subOf, want) {
-			r.fail(-1, ro.sub, "", ErrOption, fmt.Sprintf("the columns give %s, which cannot be read as %s; set the frequency to %s or leave it to be found", ro.subOf.Plural(), want.Plural(), ro.subOf))
+			r.fail(-1, ro.sub, "", ErrOption, fmt.Sprintf("they give %s, which cannot be read as %s; set the frequency to %s or leave it to be found", ro.subOf.Plural(), want.Plural(), ro.subOf))
 			return NoFrequency, nil
 		}
 		for i, n := range ords {
@@ -174,7 +181,7 @@ func (r *reader) chooseKey(ro roles, st []colStats, ords []int) int {
 	if r.opt.Layout == Wide {
 		return -1
 	}
-	candidate := -1
+	candidate, named := -1, false
 	for _, hint := range []bool{true, false} {
 		for c, name := range r.names {
 			if c == ro.date || c == ro.year || c == ro.sub || candidate >= 0 {
@@ -182,7 +189,7 @@ func (r *reader) chooseKey(ro roles, st []colStats, ords []int) int {
 			}
 			if hint && hinted(name, keyNames) && (st[c].textual() || st[c].ints == st[c].present()) ||
 				!hint && st[c].textual() && len(st[c].keys) > 1 {
-				candidate = c
+				candidate, named = c, hint
 			}
 		}
 	}
@@ -194,6 +201,9 @@ func (r *reader) chooseKey(ro roles, st []colStats, ords []int) int {
 	}
 	if candidate < 0 || ords == nil {
 		return -1
+	}
+	if named && st[candidate].textual() {
+		return candidate
 	}
 	// Long when periods repeat, and repeat far less within each key.
 	// Judged on rows spread evenly over the file.
@@ -235,7 +245,7 @@ func (r *reader) chooseValues(ro *roles, st []colStats) {
 				return
 			}
 			if used(c) {
-				r.fail(-1, c, "", ErrOption, fmt.Sprintf("column %q holds the periods or the series names and cannot also be a value column; choose another", r.names[c]))
+				r.fail(-1, c, "", ErrOption, "this column holds the periods or the series names and cannot also be a value column; choose another value column")
 				return
 			}
 			ro.values = append(ro.values, c)

@@ -157,9 +157,12 @@ func (t *table) quoted(q int, line *int32, delim byte) (int, error) {
 		k++
 	}
 	if k < len(data) && data[k] != delim && data[k] != '\n' && data[k] != '\r' {
-		return 0, &ParseError{Line: int(*line), Err: ErrQuote,
-			Msg: fmt.Sprintf("text follows the closing quote of a cell (%s); put the whole cell in quotes and double any quote inside it", quoteCell(string(data[start:min(k+1, len(data))]))),
+		end := k
+		for end < len(data) && data[end] != delim && data[end] != '\n' && data[end] != '\r' {
+			end++
 		}
+		return 0, &ParseError{Line: int(*line), Err: ErrQuote,
+			Msg: fmt.Sprintf("a cell has text after its closing quote: %s; put the whole cell in quotes and double each quote inside it, as in \"say \"\"hi\"\"\"", quoteCell(string(data[q:end])))}
 	}
 	return k, nil
 }

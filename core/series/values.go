@@ -47,7 +47,7 @@ func (r *reader) valueColumn(c int) []float64 {
 			r.decide("column %q: %s, as the decimal mark option says", name, markSentence(dec))
 		}
 	case r.opt.DecimalMark != 0:
-		r.fail(-1, c, "", ErrOption, fmt.Sprintf("%q cannot be a decimal mark; choose a point or a comma", r.opt.DecimalMark))
+		r.fail(-1, c, "", ErrOption, fmt.Sprintf("%q cannot be a decimal mark; choose a point or a comma", string(rune(r.opt.DecimalMark))))
 		return nil
 	case count[evDot] > 0 && count[evComma] > 0:
 		late, early := max(first[evDot], first[evComma]), min(first[evDot], first[evComma])
@@ -106,7 +106,12 @@ func notNumber(b []byte, why string, dec byte, nb number) string {
 		if nb.markEvidence() != evNone && (dec == '.' && nb.commas > 0 || dec == ',' && nb.dots > 0) {
 			hint = fmt.Sprintf("its %s does not fit this column, which uses %s as the decimal mark", markWord(dec != ','), markWord(dec == ','))
 		}
-	case "no digits", "too large", "too many digits":
+	case "text", "no digits":
+		hint = ""
+	case "too many digits":
+		hint = "more digits than a number can hold"
+	case "too large":
+		hint = "too large"
 	}
 	q := quoteCell(string(b))
 	if hint == "" {
