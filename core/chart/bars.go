@@ -16,9 +16,10 @@ type Bars struct {
 	// Series give one bar per group each; NaN leaves the place empty.
 	// Bands are ignored.
 	Series []Series
-	// HoldoutStart and HoldoutLabel mark the holdout as in [Line].
-	HoldoutStart int
-	HoldoutLabel string
+	// HoldoutStart, HoldoutEnd and HoldoutLabel mark the holdout as in
+	// [Line].
+	HoldoutStart, HoldoutEnd int
+	HoldoutLabel             string
 }
 
 // SVG returns the chart as a standalone SVG document. It never fails.
@@ -50,7 +51,7 @@ func (b Bars) SVG() string {
 	ar.left = valueAxisWidth(ax, b.YTitle)
 	p := periodAxis{n: n, ar: ar}
 	drawLegend(c, items, top, float64(w))
-	drawHoldout(c, p, b.HoldoutStart, b.HoldoutLabel)
+	drawHoldout(c, p, b.HoldoutStart, b.HoldoutEnd, b.HoldoutLabel)
 	drawValueAxis(c, ax, ar, b.YTitle)
 	if n == 0 || empty {
 		c.noData(ar)

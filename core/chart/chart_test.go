@@ -42,6 +42,7 @@ func goldenCases() []struct {
 		chart svgChart
 	}{
 		{"line-forecast", forecastLine(60)},
+		{"line-holdout-then-future", func() Line { l := forecastLine(48); l.HoldoutStart, l.HoldoutEnd = 30, 42; return l }()},
 		{"line-errors-quarterly", Line{
 			Frame:   Frame{Title: "Forecast errors by quarter", YTitle: "actual − forecast"},
 			Periods: quarters, ZeroLine: true, HoldoutStart: 6, HoldoutLabel: "validation",

@@ -144,9 +144,10 @@ func drawPeriodAxis(c *canvas, p periodAxis, labels []string, f Frequency, title
 	}
 }
 
-// drawHoldout tints the holdout from position start to the end of the plot
+// drawHoldout tints the holdout from position start up to position end
+// (exclusive; 0 or past the last position means to the end of the plot)
 // and writes the divider with its label.
-func drawHoldout(c *canvas, p periodAxis, start int, label string) {
+func drawHoldout(c *canvas, p periodAxis, start, end int, label string) {
 	if start <= 0 || start >= p.n {
 		return
 	}
@@ -155,7 +156,11 @@ func drawHoldout(c *canvas, p periodAxis, start int, label string) {
 	}
 	ar := p.ar
 	x := p.edge(start)
-	c.rect(x, ar.top, ar.right-x, ar.height(), fill(holdoutSlot)+" qc-holdout")
+	right := ar.right
+	if end > start && end < p.n {
+		right = p.edge(end)
+	}
+	c.rect(x, ar.top, right-x, ar.height(), fill(holdoutSlot)+" qc-holdout")
 	c.line(x, ar.top, x, ar.bottom, stroke(holdoutSlot)+" qc-divider")
 	text := label + " →"
 	if x+8+float64(len([]rune(text)))*charWidth > ar.right {

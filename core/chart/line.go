@@ -22,6 +22,10 @@ type Line struct {
 	// HoldoutStart is the position (counted from 0) of the first holdout
 	// period. 0, or a position outside the periods, marks no holdout.
 	HoldoutStart int
+	// HoldoutEnd is the position just after the last holdout period, where
+	// forecasts past the data begin; 0, or a position outside the periods,
+	// tints the holdout to the end of the chart.
+	HoldoutEnd int
 	// HoldoutLabel is written beside the divider; empty means
 	// "holdout begins".
 	HoldoutLabel string
@@ -59,7 +63,7 @@ func (l Line) SVG() string {
 	ar.left = valueAxisWidth(ax, l.YTitle)
 	p := periodAxis{n: n, ar: ar}
 	drawLegend(c, items, top, float64(w))
-	drawHoldout(c, p, l.HoldoutStart, l.HoldoutLabel)
+	drawHoldout(c, p, l.HoldoutStart, l.HoldoutEnd, l.HoldoutLabel)
 	drawValueAxis(c, ax, ar, l.YTitle)
 	if n == 0 || !vr.ok {
 		c.noData(ar)

@@ -10,7 +10,8 @@ import (
 const Missing = "—"
 
 // Number formats v with exactly decimals digits after the point and a comma
-// between every three digits of the whole part. decimals below 0 count as 0
+// between every three digits of the whole part, rounding halves away from
+// zero (41.25 to one decimal is "41.3"). decimals below 0 count as 0
 // and above 12 as 12. A result that rounds to zero never carries a minus sign.
 // NaN gives [Missing]; ±Inf gives "∞" or "-∞".
 func Number(v float64, decimals int) string {
@@ -30,7 +31,7 @@ func AppendNumber(dst []byte, v float64, decimals int) []byte {
 		return append(dst, "-∞"...)
 	}
 	var buf [64]byte
-	digits := strconv.AppendFloat(buf[:0], math.Abs(v), 'f', decimals, 64)
+	digits := strconv.AppendFloat(buf[:0], roundHalfAway(math.Abs(v), decimals), 'f', decimals, 64)
 	if v < 0 && !allZero(digits) {
 		dst = append(dst, '-')
 	}
@@ -64,7 +65,7 @@ func Plain(v float64, decimals int) string {
 	case math.IsInf(v, -1):
 		return "-Inf"
 	}
-	s := strconv.FormatFloat(v, 'f', decimals, 64)
+	s := strconv.FormatFloat(roundHalfAway(v, decimals), 'f', decimals, 64)
 	if len(s) > 0 && s[0] == '-' && allZero([]byte(s[1:])) {
 		return s[1:]
 	}
@@ -149,4 +150,17 @@ func allZero(digits []byte) bool {
 		}
 	}
 	return true
+}
+
+// roundHalfAway rounds v to decimals digits with halves away from zero, as
+// people and spreadsheets do (strconv alone rounds an exact half to even:
+// 41.25 would show as 41.2). Values too large for the scaled form to hold
+// whole numbers exactly are returned unchanged.
+func roundHalfAway(v float64, decimals int) float64 {
+	p := math.Pow(10, float64(decimals))
+	scaled := v * p
+	if math.Abs(scaled) >= 1<<52 {
+		return v
+	}
+	return math.Round(scaled) / p
 }

@@ -7,9 +7,8 @@ import (
 )
 
 func TestNumber(t *testing.T) {
-	// Expected strings: hand calculation (comma every three digits,
-	// round half away from zero as strconv does for these exact binary
-	// values).
+	// Expected strings: hand calculation (comma every three digits, halves
+	// away from zero; 1.005 is stored as 1.00499… so it rounds down).
 	tests := []struct {
 		name     string
 		v        float64
@@ -17,6 +16,9 @@ func TestNumber(t *testing.T) {
 		want     string
 	}{
 		{"thousands", 1234.5, 1, "1,234.5"},
+		{"half away from zero", 41.25, 1, "41.3"},
+		{"negative half away from zero", -2.5, 0, "-3"},
+		{"binary value just under a half", 1.005, 2, "1.00"},
 		{"millions", -1234567.891, 2, "-1,234,567.89"},
 		{"under a thousand", 999, 0, "999"},
 		{"rounds up to a thousand", 999.6, 0, "1,000"},

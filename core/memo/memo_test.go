@@ -1,0 +1,169 @@
+package memo
+
+import (
+	"archive/zip"
+	"bytes"
+	"flag"
+	"fmt"
+	"os"
+	"path/filepath"
+	"strings"
+	"testing"
+)
+
+var update = flag.Bool("update", false, "rewrite the golden files in testdata")
+
+// golden compares got with testdata/name, or rewrites it under -update.
+// The golden files are regression values: our own past output, read
+// through when written.
+func golden(t *testing.T, name, got string) {
+	t.Helper()
+	path := filepath.Join("testdata", name)
+	if *update {
+		if err := os.WriteFile(path, []byte(got), 0o644); err != nil {
+			t.Fatal(err)
+		}
+		return
+	}
+	want, err := os.ReadFile(path)
+	if err != nil {
+		t.Fatalf("%v (run go test -update to write it)", err)
+	}
+	if got != string(want) {
+		t.Errorf("%s differs from its golden file; run go test -update and inspect the diff", path)
+	}
+}
+
+func TestGoldenMarkdown(t *testing.T) {
+	m, _ := demoMemo(6)
+	got, err := Markdown(m)
+	if err != nil {
+		t.Fatal(err)
+	}
+	golden(t, "demo.md", got)
+}
+
+func TestGoldenHTML(t *testing.T) {
+	m, _ := demoMemo(6)
+	got, err := HTML(m)
+	if err != nil {
+		t.Fatal(err)
+	}
+	golden(t, "demo.html", got)
+}
+
+// zipListing describes every file of a zip: name, time, size and CRC.
+func zipListing(t *testing.T, data []byte) string {
+	t.Helper()
+	zr, err := zip.NewReader(bytes.NewReader(data), int64(len(data)))
+	if err != nil {
+		t.Fatal(err)
+	}
+	var b strings.Builder
+	for _, f := range zr.File {
+		fmt.Fprintf(&b, "%s\t%s\t%d\t%08x\n", f.Name, f.Modified.UTC().Format("2006-01-02T15:04:05Z"), f.UncompressedSize64, f.CRC32)
+	}
+	return b.String()
+}
+
+func TestGoldenZip(t *testing.T) {
+	m, sheet := demoMemo(6)
+	var first, second bytes.Buffer
+	if err := Zip(&first, m, sheet); err != nil {
+		t.Fatal(err)
+	}
+	if err := Zip(&second, m, sheet); err != nil {
+		t.Fatal(err)
+	}
+	if !bytes.Equal(first.Bytes(), second.Bytes()) {
+		t.Errorf("two zips of the same memo differ")
+	}
+	golden(t, "demo-zip.txt", zipListing(t, first.Bytes()))
+
+	// The zip's memo.md is the Markdown form, and each chart file the SVG.
+	zr, err := zip.NewReader(bytes.NewReader(first.Bytes()), int64(first.Len()))
+	if err != nil {
+		t.Fatal(err)
+	}
+	md, _ := Markdown(m)
+	files := map[string]string{}
+	for _, f := range zr.File {
+		rc, err := f.Open()
+		if err != nil {
+			t.Fatal(err)
+		}
+		var buf bytes.Buffer
+		_, _ = buf.ReadFrom(rc)
+		rc.Close()
+		files[f.Name] = buf.String()
+	}
+	if files["memo.md"] != md {
+		t.Errorf("memo.md in the zip differs from Markdown(m)")
+	}
+	for _, ex := range m.Exhibits() {
+		if ex.File == "" {
+			continue
+		}
+		if files[ex.File] != m.Sections[ex.Section].Blocks[ex.Block].(Chart).SVG {
+			t.Errorf("%s differs from the chart's SVG", ex.File)
+		}
+		if !strings.Contains(md, "]("+ex.File+")") {
+			t.Errorf("memo.md does not link %s", ex.File)
+		}
+	}
+	if !strings.HasPrefix(files["forecasts.csv"], "period,method,forecast,lo80,hi80,lo95,hi95\n") {
+		t.Errorf("forecasts.csv starts %q", files["forecasts.csv"][:min(60, len(files["forecasts.csv"]))])
+	}
+}
+
+func TestExhibits(t *testing.T) {
+	m, _ := demoMemo(3)
+	var got []string
+	for _, ex := range m.Exhibits() {
+		got = append(got, ExhibitTitle(ex.Number, ex.Caption)+" "+ex.File)
+	}
+	want := []string{
+		"Exhibit 1 — Holdout accuracy ",
+		"Exhibit 2 — Actual versus forecast charts/02-actual-vs-forecast.svg",
+		"Exhibit 3 — Forecast errors over the holdout charts/03-holdout-errors.svg",
+		"Exhibit 4 — Forecasts with 80% and 95% intervals ",
+		"Exhibit 5 — Settings ",
+	}
+	if strings.Join(got, "\n") != strings.Join(want, "\n") {
+		t.Errorf("exhibits:\n%s\nwant:\n%s", strings.Join(got, "\n"), strings.Join(want, "\n"))
+	}
+	if ExhibitTitle(7, "  ") != "Exhibit 7" {
+		t.Errorf("an empty caption should give the bare number")
+	}
+}
+
+func TestCleanStem(t *testing.T) {
+	tests := []struct{ in, want string }{
+		{"actual-vs-forecast", "actual-vs-forecast"},
+		{"Holdout Errors!", "holdout-errors"},
+		{"../../etc/passwd", "etc-passwd"},
+		{"", "chart"},
+		{"<>", "chart"},
+		{strings.Repeat("a", 60), strings.Repeat("a", 40)},
+	}
+	for _, tc := range tests {
+		t.Run(tc.in, func(t *testing.T) {
+			if got := cleanStem(tc.in); got != tc.want {
+				t.Errorf("cleanStem(%q) = %q, want %q", tc.in, got, tc.want)
+			}
+		})
+	}
+}
+
+func TestMissing(t *testing.T) {
+	m, _ := demoMemo(1)
+	if got := m.Missing(); len(got) != 0 {
+		t.Errorf("complete memo misses %v", got)
+	}
+	m.Sections = m.Sections[:2]
+	got := m.Missing()
+	want := []Kind{Partition, Comparison, Charts, Forecasts, Cautions, Notes, Appendix}
+	if fmt.Sprint(got) != fmt.Sprint(want) {
+		t.Errorf("Missing() = %v, want %v", got, want)
+	}
+}
