@@ -72,6 +72,7 @@ func Catalog() []Spec {
 		regressionSpec(),
 		thetaSpec(),
 		naive2Spec(),
+		combinationSpec(),
 	}
 	for i := range specs {
 		specs[i].New = checked(specs[i])
