@@ -13,7 +13,8 @@ import "math"
 //
 // Method: the projected BFGS method with an active set. Variables at a
 // bound whose gradient pushes outwards are held; the others move along
-// -H*g, where H is the BFGS inverse-Hessian estimate, and the step is
+// d solving B_FF d = -g_F, where B is the BFGS estimate of the Hessian and
+// F the free variables (the reduced Newton step), and the step is
 // projected onto the box and shortened until the Armijo condition holds.
 // Convergence means the projected gradient max|P(x-g)-x| fell below tol.
 // Source: D. P. Bertsekas (1982), "Projected Newton methods for
@@ -145,18 +146,56 @@ func (b boxMin) active(x, g []float64) []bool {
 	return a
 }
 
-// direction sets d = -H*g over the free variables (0 for held ones).
+// direction sets d to the solution of B_FF d_F = -g_F over the free
+// variables F (0 for held ones). It leaves d at 0 when h is nil or B_FF
+// is singular.
 func (b boxMin) direction(h [][]float64, g []float64, active []bool, d []float64) {
 	for i := range d {
 		d[i] = 0
-		if active[i] || h == nil {
-			continue
+	}
+	if h == nil {
+		return
+	}
+	var free []int
+	for i := range g {
+		if !active[i] {
+			free = append(free, i)
 		}
-		for j := range g {
-			if !active[j] {
-				d[i] -= h[i][j] * g[j]
+	}
+	k := len(free)
+	a := make([][]float64, k)
+	for r, i := range free {
+		a[r] = make([]float64, k+1)
+		for c, j := range free {
+			a[r][c] = h[i][j]
+		}
+		a[r][k] = -g[i]
+	}
+	// Gaussian elimination with partial pivoting on the k-by-k system.
+	for c := range k {
+		p := c
+		for r := c + 1; r < k; r++ {
+			if math.Abs(a[r][c]) > math.Abs(a[p][c]) {
+				p = r
 			}
 		}
+		if a[p][c] == 0 {
+			return
+		}
+		a[c], a[p] = a[p], a[c]
+		for r := c + 1; r < k; r++ {
+			q := a[r][c] / a[c][c]
+			for j := c; j <= k; j++ {
+				a[r][j] -= q * a[c][j]
+			}
+		}
+	}
+	for r := k - 1; r >= 0; r-- {
+		v := a[r][k]
+		for j := r + 1; j < k; j++ {
+			v -= a[r][j] * d[free[j]]
+		}
+		d[free[r]] = v / a[r][r]
 	}
 }
 
@@ -170,9 +209,11 @@ func (b boxMin) projGrad(x, g []float64) float64 {
 	return m
 }
 
-// bfgsUpdate returns the BFGS update of the inverse Hessian h (nil means
-// not yet started: the first update begins from a scaled identity). The
-// update is skipped when the curvature s'y is not positive.
+// bfgsUpdate returns the BFGS update of the Hessian estimate h (nil means
+// not yet started: the first update begins from the scaled identity
+// (y'y/s'y) I of Nocedal and Wright, eq. 6.20, in its Hessian form). The
+// update is skipped when the curvature s'y is not positive, which keeps h
+// positive definite.
 func bfgsUpdate(h [][]float64, s, y []float64) [][]float64 {
 	sy := dot(s, y)
 	if sy <= 1e-16*math.Sqrt(dot(s, s)*dot(y, y)) {
@@ -180,19 +221,18 @@ func bfgsUpdate(h [][]float64, s, y []float64) [][]float64 {
 	}
 	k := len(s)
 	if h == nil {
-		h = identity(k, sy/dot(y, y))
+		h = identity(k, dot(y, y)/sy)
 	}
-	rho := 1 / sy
-	hy := make([]float64, k)
+	hs := make([]float64, k)
 	for i := range k {
 		for j := range k {
-			hy[i] += h[i][j] * y[j]
+			hs[i] += h[i][j] * s[j]
 		}
 	}
-	yhy := dot(y, hy)
+	shs := dot(s, hs)
 	for i := range k {
 		for j := range k {
-			h[i][j] += (1+rho*yhy)*rho*s[i]*s[j] - rho*(hy[i]*s[j]+s[i]*hy[j])
+			h[i][j] += y[i]*y[j]/sy - hs[i]*hs[j]/shs
 		}
 	}
 	return h
