@@ -47,8 +47,12 @@ func Verbs() []VerbDef {
 				opt("every", Word, "the period of the series when the dates do not make it plain", "", "month").
 					choices("day", "week", "month", "quarter", "year"),
 				opt("season", Whole, "periods in one seasonal cycle; by default 12 for months, 4 for quarters, 52 for weeks, none for years", "", "12").between(1, 366),
-				opt("gaps", Word, "what to do with missing periods", "refuse", "interpolate").
-					choices("refuse", "interpolate", "carry", "zero"),
+				opt("series", Name, "which series of a file holding several to forecast; by default the first", "", `"Harbour Row"`),
+				opt("fill", Word, "how to fill missing values inside the series; by default they are refused", "", "linear").
+					choices("linear", "carry", "seasonal"),
+				opt("duplicates", Word, "how to combine several rows for one period; by default they are refused", "", "sum").
+					choices("sum", "mean"),
+				opt("sort", Word, "put rows that are out of order at their periods", "no", "yes").choices("yes", "no"),
 			},
 			Example: "load shop-orders.csv value=units date=month",
 		},
