@@ -11,6 +11,20 @@
 // [Fit.Residuals] the in-sample one-step errors, and [Fit.Interval] the
 // analytic prediction interval where a standard formula exists.
 //
+// # Methods
+//
+//   - benchmarks: [Naive], [SeasonalNaive], [Drift], [Mean] (benchmark.go)
+//     and the trailing [MovingAverage];
+//   - exponential smoothing, [Smoothing]: ses, holt, damped and
+//     holt-winters, additive or multiplicative, damped or not; open
+//     constants are estimated by minimising the in-sample one-step SSE
+//     with an exact gradient and a small bounded quasi-Newton loop
+//     (boxmin.go);
+//   - [Regression] on a linear, quadratic or exponential trend with
+//     seasonal dummies;
+//   - [Theta] and [Naive2], with the M3 seasonal adjustment;
+//   - transforms and blends: [Differenced] and [Combination].
+//
 // # Conventions
 //
 // Series positions are 0-based periods, horizons count from 1. A season
