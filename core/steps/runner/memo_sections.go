@@ -1,0 +1,327 @@
+package runner
+
+import (
+	"fmt"
+	"strings"
+
+	"quillcast/core/format"
+	"quillcast/core/memo"
+	"quillcast/core/session"
+)
+
+// exhibits returns the table or chart blocks of the last successful step
+// with the given verb.
+func (res *Result) lastBlocks(verb, kind string) []Block {
+	for i := len(res.Outputs) - 1; i >= 0; i-- {
+		o := res.Outputs[i]
+		if o.Verb != verb || o.Status != Done {
+			continue
+		}
+		var out []Block
+		for _, b := range o.Blocks {
+			if b.Kind == kind {
+				out = append(out, b)
+			}
+		}
+		return out
+	}
+	return nil
+}
+
+func toTable(b Block) memo.Table {
+	t := memo.Table{Caption: b.Title, Rows: b.Table.Rows, Note: b.Text}
+	for i, h := range b.Table.Headers {
+		t.Columns = append(t.Columns, memo.Column{Header: h, Numeric: i < len(b.Table.Right) && b.Table.Right[i]})
+	}
+	return t
+}
+
+func toChart(b Block) memo.Chart {
+	stem := strings.TrimSuffix(b.File, ".svg")
+	if i := strings.Index(stem, "-"); i >= 0 {
+		if j := strings.Index(stem[i+1:], "-"); j >= 0 {
+			stem = stem[i+j+2:] // drop "exhibit-NN-"
+		}
+	}
+	return memo.Chart{Caption: b.Title, SVG: b.SVG, Stem: stem}
+}
+
+func (res *Result) dataSection() memo.Section {
+	s := memo.Section{Kind: memo.Data}
+	st := res.final
+	if st == nil || st.data == nil {
+		s.Blocks = append(s.Blocks, para("No data were loaded: the session has no successful `load` step."))
+		return s
+	}
+	for _, b := range res.lastBlocks("load", TableBlock) {
+		s.Blocks = append(s.Blocks, toTable(b))
+	}
+	var log []string
+	ds := st.data.set
+	for _, c := range ds.Changes {
+		if c.Series == st.data.series.Name {
+			log = append(log, c.Text)
+		}
+	}
+	for _, p := range ds.Problems {
+		if p.Series == st.data.series.Name {
+			log = append(log, p.String())
+		}
+	}
+	if len(log) == 0 {
+		s.Blocks = append(s.Blocks, para("Cleaning log: nothing was changed; the file has no gaps, duplicates or rows out of order in this series."))
+	} else {
+		s.Blocks = append(s.Blocks, para("Cleaning log:"), memo.List{Items: log})
+	}
+	s.Blocks = append(s.Blocks, para("The fingerprint identifies the exact file read: the same file always gives the same fingerprint, so a reader can check that a refresh used the data they expect. The data themselves are not part of this memo."))
+	return s
+}
+
+func (res *Result) partitionSection() memo.Section {
+	s := memo.Section{Kind: memo.Partition}
+	st := res.final
+	if st == nil || st.data == nil || st.split == nil {
+		s.Blocks = append(s.Blocks, para("No validation period was held out, so no method was scored on periods it had not seen. Treat any accuracy figure from the training period as optimistic."))
+		return s
+	}
+	d, te := st.data, st.split.trainEnd
+	s.Blocks = append(s.Blocks, para("Training period: %s to %s (%s). Validation (holdout) period: %s to %s (%s). Every method was fitted on the training period only and scored on the validation period; the forecasts past the end of the data come from a refit on all %s.",
+		d.periods[0], d.periods[te-1], count(te, "period", "periods"), d.periods[te], d.periods[len(d.y)-1], count(len(d.y)-te, "period", "periods"), count(len(d.y), "period", "periods")))
+	return s
+}
+
+func (res *Result) comparisonSection() memo.Section {
+	s := memo.Section{Kind: memo.Comparison}
+	tables := res.lastBlocks("evaluate", TableBlock)
+	if len(tables) == 0 {
+		s.Blocks = append(s.Blocks, para("No comparison was made: the session has no successful `evaluate` step."))
+	}
+	for _, b := range tables {
+		s.Blocks = append(s.Blocks, toTable(b))
+	}
+	for _, verb := range []string{"backtest", "bakeoff"} {
+		for _, b := range res.lastBlocks(verb, TableBlock) {
+			s.Blocks = append(s.Blocks, toTable(b))
+		}
+	}
+	return s
+}
+
+// chartsSection repeats the charts a reader needs: the series, the holdout
+// comparison and errors, the sweeps, accuracy by horizon, the
+// decomposition, residual checks and the recommended forecast.
+func (res *Result) chartsSection(rec *fcast) memo.Section {
+	s := memo.Section{Kind: memo.Charts}
+	for _, o := range res.Outputs {
+		if o.Status != Done {
+			continue
+		}
+		for _, b := range o.Blocks {
+			if b.Kind != ChartBlock {
+				continue
+			}
+			switch o.Verb {
+			case "split", "smooth", "difference":
+				continue
+			case "forecast", "combine":
+				if rec == nil || o.Step != rec.step {
+					continue
+				}
+			}
+			s.Blocks = append(s.Blocks, toChart(b))
+		}
+	}
+	if len(s.Blocks) == 0 {
+		s.Blocks = append(s.Blocks, para("No charts: no step drew one."))
+	}
+	return s
+}
+
+func (res *Result) forecastSection(rec *fcast) memo.Section {
+	s := memo.Section{Kind: memo.Forecasts}
+	if rec == nil {
+		s.Blocks = append(s.Blocks, para("No forecast is recommended, so no forecast table is given."))
+		return s
+	}
+	st := res.final
+	labels := futureLabelsOf(st, len(rec.future))
+	t := memo.Table{Caption: "Forecast of " + rec.label + " (" + rec.title + ")",
+		Columns: []memo.Column{{Header: "period"}, {Header: "forecast", Numeric: true}}}
+	levels := []float64{80, 95}
+	for _, l := range levels {
+		t.Columns = append(t.Columns, memo.Column{Header: num0(l) + "% low", Numeric: true}, memo.Column{Header: num0(l) + "% high", Numeric: true})
+	}
+	dec := format.ColumnDecimals(rec.future)
+	for i, v := range rec.future {
+		row := []string{labels[i], numIn(v, dec)}
+		for _, l := range levels {
+			if b := bandAt(rec, l); b != nil {
+				row = append(row, numIn(b.lo[i], dec), numIn(b.hi[i], dec))
+			} else {
+				row = append(row, format.Missing, format.Missing)
+			}
+		}
+		t.Rows = append(t.Rows, row)
+	}
+	t.Note = intervalSource(rec)
+	s.Blocks = append(s.Blocks, t)
+	return s
+}
+
+func intervalSource(f *fcast) string {
+	switch {
+	case len(f.bands) == 0:
+		return "No interval: the method has no formula for one and no backtest gave empirical intervals; a dash marks the missing bounds."
+	case f.bands[0].empirical:
+		return "Intervals are empirical: quantiles of the errors the method made at each horizon in the rolling-origin backtest."
+	}
+	return "Intervals come from the method's formula; stated intervals tend to be too narrow."
+}
+
+func (res *Result) cautionsSection() memo.Section {
+	st := res.final
+	var items []string
+	if st != nil {
+		items = append(items, st.cautions...)
+		if st.data != nil && st.split == nil {
+			items = append(items, "No validation period was held out: the accuracy of these forecasts on unseen periods is unknown.")
+		}
+	}
+	for _, o := range res.Outputs {
+		switch o.Status {
+		case Failed:
+			items = append(items, fmt.Sprintf("Step %d (`%s`) failed and its results are missing: %s", o.Step, o.Text, o.Error.Msg))
+		case Waiting:
+			items = append(items, fmt.Sprintf("Step %d (`%s`) did not run: it waits on step %d, which failed.", o.Step, o.Text, o.WaitsOn))
+		}
+	}
+	return memo.CautionsSection(items...)
+}
+
+// notesSection gathers the prose of the session, the analyst's own words,
+// leaving out the first level-one heading (it is the memo's title).
+func (res *Result) notesSection() memo.Section {
+	s := memo.Section{Kind: memo.Notes}
+	if res.doc == nil {
+		return s
+	}
+	dropped := false
+	for _, p := range res.doc.Parts {
+		if p.Kind != session.Prose {
+			continue
+		}
+		text := p.Raw
+		if !dropped {
+			var kept []string
+			for _, l := range strings.Split(text, "\n") {
+				if !dropped && strings.HasPrefix(strings.TrimSpace(l), "# ") {
+					dropped = true
+					continue
+				}
+				kept = append(kept, l)
+			}
+			text = strings.Join(kept, "\n")
+		}
+		if strings.TrimSpace(text) != "" {
+			s.Blocks = append(s.Blocks, memo.Paragraph{Text: demoteHeadings(strings.TrimSpace(text))})
+		}
+	}
+	if len(s.Blocks) == 0 {
+		s.Blocks = append(s.Blocks, para("The analyst added no notes."))
+	}
+	return s
+}
+
+func (res *Result) appendixSection(version string) memo.Section {
+	s := memo.Section{Kind: memo.Appendix}
+	steps := ""
+	if res.doc != nil {
+		steps = res.doc.Steps()
+	}
+	s.Blocks = append(s.Blocks, para("The steps below reproduce every figure of this memo when run on the same data file (check its fingerprint)."),
+		memo.Steps{Info: session.StepsInfo, Text: steps})
+	st := res.final
+	if st != nil {
+		var items []string
+		for _, f := range st.forecasts {
+			item := fmt.Sprintf("%s: %s", f.label, f.title)
+			var ps []string
+			for _, p := range f.params {
+				how := "given"
+				if p.Estimated {
+					how = "estimated"
+				}
+				ps = append(ps, fmt.Sprintf("%s %s (%s)", p.Name, value(p.Value), how))
+			}
+			if len(ps) > 0 {
+				item += "; " + strings.Join(ps, ", ")
+			}
+			items = append(items, item)
+		}
+		if len(items) > 0 {
+			s.Blocks = append(s.Blocks, para("Settings of each forecast, as fitted on the training period:"), memo.List{Items: items})
+		}
+	}
+	if version != "" {
+		s.Blocks = append(s.Blocks, para("Program version: %s.", version))
+	}
+	return s
+}
+
+// ForecastSheet returns every forecast past the end of the data as rows for
+// forecasts.csv: period, method label, forecast and the 80% and 95% bounds
+// (empty where there is none), numbers in plain form.
+func (res *Result) ForecastSheet() memo.Sheet {
+	sh := memo.Sheet{Header: memo.ForecastHeader()}
+	st := res.final
+	if st == nil || st.data == nil {
+		return sh
+	}
+	for _, f := range st.forecasts {
+		labels := futureLabelsOf(st, len(f.future))
+		for i, v := range f.future {
+			row := []string{labels[i], f.label, format.Plain(v, 4)}
+			for _, l := range []float64{80, 95} {
+				if b := bandAt(f, l); b != nil {
+					row = append(row, format.Plain(b.lo[i], 4), format.Plain(b.hi[i], 4))
+				} else {
+					row = append(row, "", "")
+				}
+			}
+			sh.Rows = append(sh.Rows, row)
+		}
+	}
+	return sh
+}
+
+// demoteHeadings moves the ATX headings of the analyst's prose two levels
+// down (## becomes ####), so that they sit under the memo's own section
+// headings; lines inside fenced code are left alone.
+func demoteHeadings(text string) string {
+	lines := strings.Split(text, "\n")
+	fence := ""
+	for i, l := range lines {
+		t := strings.TrimLeft(l, " ")
+		if len(l)-len(t) > 3 {
+			continue
+		}
+		if fence != "" {
+			if strings.HasPrefix(t, fence) {
+				fence = ""
+			}
+			continue
+		}
+		if strings.HasPrefix(t, "```") || strings.HasPrefix(t, "~~~") {
+			fence = t[:3]
+			continue
+		}
+		n := 0
+		for n < len(t) && t[n] == '#' {
+			n++
+		}
+		if n >= 1 && n <= 6 && (n == len(t) || t[n] == ' ' || t[n] == '\t') {
+			lines[i] = strings.Repeat("#", min(n+2, 6)) + t[n:]
+		}
+	}
+	return strings.Join(lines, "\n")
+}
