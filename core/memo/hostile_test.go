@@ -79,7 +79,7 @@ func liveMarkup(body string) string {
 
 func hostileMemo(text string) Memo {
 	return Memo{
-		Title:      text,
+		Title:      "Memo " + text,
 		PreparedBy: text,
 		Client:     text,
 		Date:       text,

@@ -6,6 +6,7 @@ import (
 	"github.com/yuin/goldmark/ast"
 	"github.com/yuin/goldmark/parser"
 	"github.com/yuin/goldmark/text"
+	"github.com/yuin/goldmark/util"
 )
 
 // safeLinks is a goldmark AST transformer that keeps only links whose
@@ -30,7 +31,9 @@ func (safeLinks) Transform(doc *ast.Document, reader text.Reader, _ parser.Conte
 		case *ast.Image:
 			unwrap = append(unwrap, t)
 		case *ast.Link:
-			if !safeURL(string(t.Destination)) {
+			// check the destination both as written and with character
+			// references resolved, as the HTML writer will resolve them
+			if !safeURL(string(t.Destination)) || !safeURL(string(util.URLEscape(t.Destination, true))) {
 				unwrap = append(unwrap, t)
 			}
 		case *ast.AutoLink:
