@@ -91,22 +91,31 @@ func SweepMovingAverage(y []float64, trainEnd int, widths Range) (*WidthSweep, e
 }
 
 // widthRow scores one width in one pass over the training data with a
-// running sum of the last w values.
+// running sum of the last w values. Periods before common count only on
+// the width's own window; from common on they count on both, so the own
+// window is the early part plus the common part.
 func widthRow(y []float64, trainEnd, w, common int) WidthRow {
 	var sum float64
 	for _, v := range y[:w] {
 		sum += v
 	}
-	var own, com accumulator
-	fw := float64(w)
-	for t := w; t < trainEnd; t++ {
-		e := y[t] - sum/fw
-		own.add(e)
-		if t >= common {
-			com.add(e)
-		}
+	inv := 1 / float64(w)
+	var early, com accumulator
+	split := min(common, trainEnd)
+	for t := w; t < split; t++ {
+		e := y[t] - sum*inv
+		early.sq += e * e
+		early.abs += math.Abs(e)
 		sum += y[t] - y[t-w]
 	}
+	for t := split; t < trainEnd; t++ {
+		e := y[t] - sum*inv
+		com.sq += e * e
+		com.abs += math.Abs(e)
+		sum += y[t] - y[t-w]
+	}
+	early.n, com.n = split-w, trainEnd-split
+	own := accumulator{n: early.n + com.n, sq: early.sq + com.sq, abs: early.abs + com.abs}
 	// Recompute the final window exactly so that the holdout forecast does
 	// not carry the rounding of a long running sum.
 	var last float64
@@ -114,7 +123,7 @@ func widthRow(y []float64, trainEnd, w, common int) WidthRow {
 		last += v
 	}
 	var val accumulator
-	f := last / fw
+	f := last / float64(w)
 	for _, v := range y[trainEnd:] {
 		val.add(v - f)
 	}
