@@ -79,6 +79,9 @@ func checkCases() []checkCase {
 		{"empty", nil, 12, movingAverage, []string{"info length: The series has no values to check."}},
 		{"two values", []float64{1, 2}, 0, movingAverage, []string{
 			"info trend: The trend could not be tested: a trend test needs at least 3 values; the series has 2."}},
+		{"three seasons of noise", noiseSeries(36, 100, 3), 12, movingAverage, []string{
+			"info season: The series shows no clear pattern repeating every 12 periods.",
+			"not used with fewer than 4 full seasons or 20 values"}},
 		{"too short for the season", noiseSeries(20, 50, 2), 12, movingAverage, []string{
 			"info trend:", "info season: The series is too short to check a season of 12 periods: that needs more than two full seasons (25 values); it has 20."}},
 	}

@@ -61,8 +61,10 @@ type Decomposition struct {
 //
 // It returns an [*InputError] when season is below 2, when y holds fewer
 // than two full seasons, when a value is NaN or infinite, when kind is not
-// one of the two kinds, or, for a multiplicative decomposition, when a value
-// is zero or negative.
+// one of the two kinds, for a multiplicative decomposition when a value is
+// zero or negative, and when the values are so large (or, for a
+// multiplicative one, so small) that a component cannot be held as a
+// finite number.
 //
 // Reference: M. Kendall and A. Stuart, The Advanced Theory of Statistics,
 // vol. 3, 3rd ed. (1976), Griffin, ch. 46; R. J. Hyndman and
@@ -118,14 +120,20 @@ func Decompose(y []float64, season int, kind Kind) (*Decomposition, error) {
 			d.Indices[j] /= centre
 		}
 	}
+	half := season / 2
 	for t, v := range y {
 		s := d.Indices[t%season]
 		d.Seasonal[t] = s
 		d.Adjusted[t] = split(v, s)
-		if math.IsNaN(trend[t]) {
+		if t < half || t >= n-half {
 			d.Remainder[t] = math.NaN()
 		} else {
 			d.Remainder[t] = split(v, combine(trend[t], s))
+		}
+		inside := t >= half && t < n-half
+		if !isFinite(s) || !isFinite(d.Adjusted[t]) || (inside && (!isFinite(trend[t]) || !isFinite(d.Remainder[t]))) {
+			return nil, inputErr(ErrNotFinite, t+1,
+				"the values are too large or too small to decompose (the trouble starts at period %d); rescale the series, for example to thousands", t+1)
 		}
 	}
 	return d, nil

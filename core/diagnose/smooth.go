@@ -13,7 +13,7 @@ import "math"
 // y[t-w/2 .. t+w/2], which is the mean of two neighbouring w-averages, so
 // that the result sits on a period rather than between two. Positions too
 // near either end to have a full window are NaN, as is any position whose
-// window holds a NaN or infinite value.
+// window holds a NaN or infinite value or whose sum is too large to hold.
 //
 // It returns an error when width is below 1 or the series is shorter than
 // the window (w values for odd w, w+1 for even w). Width 1 returns a copy.
@@ -111,11 +111,11 @@ func windowMeans(y []float64, w int) []float64 {
 			}
 		}
 		if i >= w-1 {
-			if bad > 0 {
-				out[i-w+1] = math.NaN()
-			} else {
-				out[i-w+1] = (sum + comp) / float64(w)
+			m := (sum + comp) / float64(w)
+			if bad > 0 || !isFinite(m) {
+				m = math.NaN() // a gap in the window, or a sum too large to hold
 			}
+			out[i-w+1] = m
 		}
 	}
 	return out

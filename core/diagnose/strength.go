@@ -58,11 +58,28 @@ func strength(d *Decomposition, c []float64) float64 {
 	if len(rem) < 2 {
 		return 0
 	}
+	// The ratio does not depend on the unit: scale both into [-1, 1] so
+	// that the squares cannot overflow.
+	var big float64
+	for i := range rem {
+		big = max(big, math.Abs(rem[i]), math.Abs(sum[i]))
+	}
+	if !(big > 0) || math.IsInf(big, 0) {
+		return 0
+	}
+	for i := range rem {
+		rem[i] /= big
+		sum[i] /= big
+	}
 	vs := variance(sum)
 	if !(vs > 0) {
 		return 0
 	}
-	return max(0, 1-variance(rem)/vs)
+	f := 1 - variance(rem)/vs
+	if !(f > 0) {
+		return 0
+	}
+	return min(f, 1)
 }
 
 // variance returns the population variance of x (the ratio of two
