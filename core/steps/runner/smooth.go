@@ -48,6 +48,6 @@ func (x *exec) smooth() error {
 			note += " Its width equals the season, so the season averages out and the trend shows."
 		}
 	}
-	x.chart(d.series.Name+" smoothed", "smooth", svg, note)
+	x.chart(d.series.Name+" with a "+name, "smooth", svg, note)
 	return nil
 }
