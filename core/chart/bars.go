@@ -28,7 +28,7 @@ func (b Bars) SVG() string {
 	w, h := frameSize(b.Frame, 720, 360)
 	var items []legendItem
 	for i, s := range b.Series {
-		items = append(items, legendItem{name: s.Name, kind: swatchBar, slot: i})
+		items = append(items, legendItem{name: s.Name, kind: swatchBar, slot: i, marker: len(b.Series) > 1})
 	}
 	var vr valueRange
 	for _, s := range b.Series {

@@ -20,7 +20,7 @@ type legendItem struct {
 	kind   swatchKind
 	slot   int    // palette slot; -1 is the text colour (actual data)
 	class  string // extra classes for the swatch (qc-smooth, qc-band80, …)
-	marker bool   // a line swatch also shows the slot's marker
+	marker bool   // the swatch also shows the slot's marker
 }
 
 const (
@@ -72,7 +72,12 @@ func drawLegend(c *canvas, items []legendItem, top, w float64) {
 		case swatchBand:
 			c.rect(x, y-6, swatchWidth, 12, fill(it.slot)+" "+it.class)
 		case swatchBar:
-			c.rect(x+swatchWidth/2-6, y-6, 12, 12, fill(it.slot)+" qc-bar")
+			if it.marker {
+				c.rect(x, y-6, 12, 12, fill(it.slot)+" qc-bar")
+				c.marker(it.slot, x+20, y, 3)
+			} else {
+				c.rect(x+swatchWidth/2-6, y-6, 12, 12, fill(it.slot)+" qc-bar")
+			}
 		}
 		c.text(x+swatchWidth+6, y+4, "qc-text", "start", it.name)
 		x += iw

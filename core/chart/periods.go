@@ -112,7 +112,9 @@ var yearSteps = [...]int{1, 2, 5, 10, 20, 25, 50, 100, 200, 500, 1000}
 // allowed) among labels. Over three years or more it marks the first period
 // of each year (or of every 2nd, 5th, … year) and shows the year; monthly
 // data over a shorter span get every month, 2nd, 3rd or 6th month from
-// January; anything else is thinned evenly.
+// January, weekly data every 1, 2, 4, 13 or 26 weeks from week 1, daily
+// data the first of every 1, 2, 3 or 6 months; anything else is thinned
+// evenly.
 func periodTicks(labels []string, f Frequency, maxTicks int) []tick {
 	maxTicks = max(maxTicks, 2)
 	if f == Inferred {
@@ -128,8 +130,17 @@ func periodTicks(labels []string, f Frequency, maxTicks int) []tick {
 			return t
 		}
 	}
-	if f == Monthly {
+	switch f {
+	case Monthly:
 		if t := monthTicks(labels, maxTicks); len(t) >= 2 {
+			return t
+		}
+	case Weekly:
+		if t := weekTicks(labels, maxTicks); len(t) >= 2 {
+			return t
+		}
+	case Daily:
+		if t := dayTicks(labels, maxTicks); len(t) >= 2 {
 			return t
 		}
 	}
@@ -174,6 +185,45 @@ func monthTicks(labels []string, maxTicks int) []tick {
 			s, ok := parseStamp(l, Monthly)
 			if ok && (s.sub-1)%k == 0 {
 				out = append(out, tick{i, l})
+			}
+		}
+		if len(out) <= maxTicks {
+			return out
+		}
+	}
+	return nil
+}
+
+// weekTicks marks every k-th week (k of 1, 2, 4, 13 or 26) counted from
+// week 1, labelled in full.
+func weekTicks(labels []string, maxTicks int) []tick {
+	for _, k := range [...]int{1, 2, 4, 13, 26} {
+		var out []tick
+		for i, l := range labels {
+			s, ok := parseStamp(l, Weekly)
+			if ok && (s.sub-1)%k == 0 {
+				out = append(out, tick{i, l})
+			}
+		}
+		if len(out) <= maxTicks {
+			return out
+		}
+	}
+	return nil
+}
+
+// dayTicks marks the first day of every k-th month (k of 1, 2, 3 or 6),
+// labelled by the month ("2024-03").
+func dayTicks(labels []string, maxTicks int) []tick {
+	for _, k := range [...]int{1, 2, 3, 6} {
+		var out []tick
+		for i, l := range labels {
+			if shapeOf(l) != Daily || l[8:] != "01" {
+				continue
+			}
+			month, _ := strconv.Atoi(l[5:7])
+			if (month-1)%k == 0 {
+				out = append(out, tick{i, l[:7]})
 			}
 		}
 		if len(out) <= maxTicks {

@@ -4,12 +4,30 @@ import (
 	"fmt"
 	"slices"
 	"testing"
+	"time"
 )
 
 func quarterLabels(year, n int) []string {
 	out := make([]string, n)
 	for i := range out {
 		out[i] = fmt.Sprintf("%04d-Q%d", year+i/4, i%4+1)
+	}
+	return out
+}
+
+func weekLabels(year, n int) []string {
+	out := make([]string, n)
+	for i := range out {
+		out[i] = fmt.Sprintf("%04d-W%02d", year+i/52, i%52+1)
+	}
+	return out
+}
+
+func dayLabels(year, month, n int) []string {
+	out := make([]string, n)
+	d := time.Date(year, time.Month(month), 1, 0, 0, 0, 0, time.UTC)
+	for i := range out {
+		out[i] = d.AddDate(0, 0, i).Format("2006-01-02")
 	}
 	return out
 }
@@ -61,6 +79,11 @@ func TestPeriodTicks(t *testing.T) {
 		{"yearly every 5", []string{"2001", "2002", "2003", "2004", "2005", "2006", "2007", "2008", "2009", "2010", "2011"}, Inferred, 4, []string{"2005", "2010"}},
 		{"horizons", []string{"1", "2", "3", "4", "5", "6", "7", "8", "9", "10", "11", "12"}, Unlabelled, 6, []string{"1", "3", "5", "7", "9", "11"}},
 		{"forced unlabelled on months", monthLabels(2019, 60), Unlabelled, 10, []string{"2019-01", "2019-11", "2020-09", "2021-07", "2022-05", "2023-03"}},
+		{"ten weeks every 4th", []string{"2024-W01", "2024-W02", "2024-W03", "2024-W04", "2024-W05", "2024-W06", "2024-W07", "2024-W08", "2024-W09", "2024-W10"}, Inferred, 4, []string{"2024-W01", "2024-W05", "2024-W09"}},
+		{"a year of weeks by quarter", weekLabels(2024, 52), Inferred, 5, []string{"2024-W01", "2024-W14", "2024-W27", "2024-W40"}},
+		{"four years of weeks by year", weekLabels(2021, 208), Inferred, 8, []string{"2021", "2022", "2023", "2024"}},
+		{"ninety days by month", dayLabels(2024, 1, 91), Inferred, 6, []string{"2024-01", "2024-02", "2024-03"}},
+		{"a year of days every 3rd month", dayLabels(2024, 1, 366), Inferred, 5, []string{"2024-01", "2024-04", "2024-07", "2024-10"}},
 		{"single label", []string{"2024-03"}, Inferred, 5, []string{"2024-03"}},
 		{"nothing", nil, Inferred, 5, nil},
 	}
