@@ -96,6 +96,9 @@ func rough(v float64) string {
 		return num(v)
 	}
 	k := math.Pow(10, math.Floor(math.Log10(math.Abs(v)))-1)
+	if !(k > 0) || math.IsInf(k, 0) || math.Abs(v) < 1e-6 || math.Abs(v) >= 1e15 {
+		return num(v)
+	}
 	if k >= 1 {
 		return strconv.FormatFloat(math.Round(v/k)*k, 'f', 0, 64)
 	}
