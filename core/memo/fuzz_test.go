@@ -93,3 +93,25 @@ func FuzzHTMLNote(f *testing.F) {
 		}
 	})
 }
+
+// FuzzCheckSVG checks that checkSVG never panics and never accepts a
+// drawing holding something that runs or loads in a browser.
+func FuzzCheckSVG(f *testing.F) {
+	f.Add(`<svg xmlns="http://www.w3.org/2000/svg"><rect x="1"/></svg>`)
+	f.Add(`<svg xmlns="http://www.w3.org/2000/svg"><script>alert(1)</script></svg>`)
+	f.Add(`<svg xmlns="http://www.w3.org/2000/svg" onload="x"></svg>`)
+	f.Add(`<svg><style>@import url(x)</style></svg>`)
+	f.Add(`<!DOCTYPE x><svg/>`)
+	f.Add(`<svg/><svg/>`)
+	f.Fuzz(func(t *testing.T, doc string) {
+		if checkSVG(doc) != nil {
+			return
+		}
+		low := strings.ToLower(doc)
+		for _, bad := range []string{"<script", "<foreignobject", "<image", "href", "url(", "@import", "<!doctype", "<!entity"} {
+			if strings.Contains(low, bad) {
+				t.Fatalf("accepted %q holding %q", doc, bad)
+			}
+		}
+	})
+}

@@ -9,6 +9,9 @@ import (
 	"path/filepath"
 	"strings"
 	"testing"
+
+	"github.com/yuin/goldmark"
+	"github.com/yuin/goldmark/extension"
 )
 
 var update = flag.Bool("update", false, "rewrite the golden files in testdata")
@@ -165,5 +168,54 @@ func TestMissing(t *testing.T) {
 	want := []Kind{Partition, Comparison, Charts, Forecasts, Cautions, Notes, Appendix}
 	if fmt.Sprint(got) != fmt.Sprint(want) {
 		t.Errorf("Missing() = %v, want %v", got, want)
+	}
+}
+
+// TestMarkdownReadsBack renders the Markdown memo with a CommonMark + GFM
+// table reader and checks that every table and chart came through as one.
+func TestMarkdownReadsBack(t *testing.T) {
+	m, _ := demoMemo(4)
+	md, err := Markdown(m)
+	if err != nil {
+		t.Fatal(err)
+	}
+	var out bytes.Buffer
+	if err := goldmark.New(goldmark.WithExtensions(extension.Table)).Convert([]byte(md), &out); err != nil {
+		t.Fatal(err)
+	}
+	doc := out.String()
+	if got := strings.Count(doc, "<table>"); got != 3 {
+		t.Errorf("%d tables read back, want 3", got)
+	}
+	if got := strings.Count(doc, `<img src="charts/`); got != 2 {
+		t.Errorf("%d chart images read back, want 2", got)
+	}
+	if got := strings.Count(doc, "<h2>"); got != len(m.Sections) {
+		t.Errorf("%d section headings read back, want %d", got, len(m.Sections))
+	}
+	if !strings.Contains(doc, `<td style="text-align:left">ma12 | trailing</td>`) {
+		t.Errorf("a cell with a pipe did not read back whole")
+	}
+	if !strings.Contains(doc, `<td style="text-align:right">1,211</td>`) {
+		t.Errorf("numeric columns are not right-aligned")
+	}
+}
+
+func TestHTMLPage(t *testing.T) {
+	m, _ := demoMemo(2)
+	doc, err := HTML(m)
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, want := range []string{
+		"Content-Security-Policy", "default-src 'none'", "prefers-color-scheme:dark",
+		`<svg xmlns="http://www.w3.org/2000/svg"`, "<caption>Exhibit 1 — Holdout accuracy</caption>",
+		"<figcaption>Exhibit 2 — Actual versus forecast</figcaption>",
+		`<td class="num">1,211</td>`, `<a href="https://example.com/shops">shop list</a>`,
+		"Written with Quillcast 0.1.0.",
+	} {
+		if !strings.Contains(doc, want) {
+			t.Errorf("the page lacks %q", want)
+		}
 	}
 }
