@@ -10,7 +10,15 @@
 // [NaiveScale]. [ParseMeasure] reads a measure's name as written in steps
 // ("rmse", "mase"), and [Measure.Definition] gives the plain definition to
 // print in the page and the memo. [ScoreIntervals] scores prediction
-// intervals.
+// intervals by coverage and the [Winkler] score. [Tally] and
+// [IntervalTally] gather the same scores one period at a time, for
+// rolling-origin evaluation by horizon.
+//
+//	scale := accuracy.NaiveScale(train, 12) // seasonal naive scaling
+//	s := accuracy.Evaluate(actual, forecast, scale)
+//	if r := s.Of(accuracy.MAPE); !r.Defined {
+//		fmt.Println(r.Reason) // MAPE undefined: 3 actual values are zero
+//	}
 //
 // # Conventions
 //

@@ -10,11 +10,28 @@
 //     classical method; [SeasonalityTest] says whether a season is there.
 //   - [CenteredMovingAverage] and [TrailingMovingAverage] draw smoothed lines
 //     for display; [Difference] takes lag differences.
-//   - [ACF], [LjungBox] and [BoxPierce] look at autocorrelation.
-//   - [MannKendall] tests for a monotonic trend; [SeasonalStrength] measures
-//     how much of the variation a season accounts for.
+//   - [ACF] with its white-noise band [ACFBound], [LjungBox] and
+//     [BoxPierce] look at autocorrelation.
+//   - [MannKendall] tests for a monotonic trend and estimates its slope;
+//     [SeasonalStrength] and [TrendStrength] measure how much of the
+//     variation a season or a trend accounts for.
 //   - [Check] and [CheckResiduals] return [Finding] values to show under a
-//     forecast.
+//     forecast: plain sentences with the figures behind them.
+//
+// # Assumption checks
+//
+// A forecasting method describes what it takes for granted with [Assumes];
+// [Check] tests the training series and says, with the evidence, where the
+// data contradict it:
+//
+//	findings := diagnose.Check(train, 12, diagnose.Assumes{
+//		Name: "a moving average", NoTrend: true, NoSeason: true})
+//	// warning trend: The series rises by about 2.1% a period (Mann-Kendall
+//	//   p < 0.001): a moving average assumes no trend, lags behind it and
+//	//   will under-forecast.
+//
+// [CheckResiduals] does the same for the one-step residuals of a fit: are
+// they like noise, and do they average zero?
 //
 // # Conventions
 //

@@ -136,8 +136,8 @@ func senSlope(y []float64, spread float64) float64 {
 	// Bisection stops when the bracket is narrower than tiny; the k-th
 	// slope lies in (lo, hi], so hi is within tiny of it.
 	tiny := 1e-12 * spread
-	kth := func(k int64) float64 {
-		lo, hi := -spread*1.5, spread*1.5 // below(lo) = 0 < k <= pairs = below(hi)
+	kth := func(k int64, lo float64) float64 {
+		hi := spread * 1.5 // below(lo) < k <= pairs = below(hi)
 		for i := 0; i < 200 && hi-lo > tiny; i++ {
 			mid := lo + (hi-lo)/2
 			if below(mid) >= k {
@@ -150,9 +150,15 @@ func senSlope(y []float64, spread float64) float64 {
 	}
 	var slope float64
 	if pairs%2 == 1 {
-		slope = kth((pairs + 1) / 2)
+		slope = kth((pairs+1)/2, -spread*1.5)
 	} else {
-		slope = (kth(pairs/2) + kth(pairs/2+1)) / 2
+		low := kth(pairs/2, -spread*1.5)
+		high := low
+		if below(low) < pairs/2+1 {
+			// The next slope lies above low: search only above it.
+			high = kth(pairs/2+1, low)
+		}
+		slope = (low + high) / 2
 	}
 	if math.Abs(slope) <= tiny {
 		return 0 // a flat median slope, up to the bisection's resolution
