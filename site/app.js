@@ -1,73 +1,301 @@
-// Quillcast page: starts the engine, attaches the demo data and shows what
-// the engine returns. No number is computed or formatted here: every figure
-// and chart arrives finished from the engine.
+// Quillcast page: starts the engine, opens the last session (or the demo on
+// a first visit), runs it and keeps it saved in the browser. No figure is
+// computed or formatted here: every table, chart and message arrives
+// finished from the engine.
 
 import { start, call, EngineError } from "./engine.js";
-import { el, svgFragment, figureTable } from "./dom.js";
+import { el } from "./dom.js";
+import { Notebook } from "./notebook.js";
+import { showHelp } from "./help.js";
+import { attachFiles, attachPaste, showPreview } from "./data.js";
 
-const statusLine = document.getElementById("status");
+const $ = (id) => document.getElementById(id);
+const root = document.documentElement;
+
+/** state of the open session. */
+const session = { id: "", title: "", text: "", version: 0, parts: [] };
+let saveTimer = 0;
+let runSeq = 0;
 
 function setStatus(text, problem = false) {
-  statusLine.textContent = text;
-  statusLine.classList.toggle("problem", problem);
+  $("status").textContent = text;
+  $("status").classList.toggle("problem", problem);
+}
+
+function banner(text, ...actions) {
+  const b = $("banner");
+  if (!text) { b.hidden = true; b.replaceChildren(); return; }
+  b.replaceChildren(el("span", {}, text), ...actions);
+  b.hidden = false;
+}
+
+function explain(err) {
+  return err instanceof EngineError ? err.message : `${err.message || err}`;
+}
+
+const notebook = new Notebook($("parts"), {
+  onChange: (parts) => runAndSave(parts),
+  complete: (line, col) => {
+    try {
+      return JSON.parse(globalThis.quillcast.complete(line, col)).value || [];
+    } catch {
+      return [];
+    }
+  },
+});
+
+/** run sends the parts to the engine and shows the outputs. */
+async function run(parts) {
+  const seq = ++runSeq;
+  setStatus("Running the steps…");
+  const res = await call("run", JSON.stringify(parts));
+  if (seq !== runSeq) return null; // a newer edit is on its way
+  session.text = res.text;
+  session.parts = res.parts;
+  notebook.show(res.parts, res.result.outputs);
+  const n = res.result.errors ? res.result.errors.length : 0;
+  setStatus(n === 0 ? "All steps ran. Everything stays on this computer." : `${n} step${n === 1 ? " has a" : "s have"} a problem; see the marked lines.`, n > 0);
+  return res;
+}
+
+async function runAndSave(parts) {
+  try {
+    const res = await run(parts);
+    if (res) scheduleSave();
+  } catch (err) {
+    setStatus(`Could not run the steps: ${explain(err)}`, true);
+  }
+}
+
+/** scheduleSave saves the session within a second of the last edit. */
+function scheduleSave() {
+  clearTimeout(saveTimer);
+  root.dataset.saved = "pending";
+  saveTimer = setTimeout(save, 400);
+}
+
+async function save() {
+  try {
+    const saved = await call("saveSession", JSON.stringify({
+      id: session.id, title: session.title, text: session.text, datasets: [], version: session.version,
+    }));
+    session.id = saved.id;
+    session.version = saved.version;
+    root.dataset.saved = String(saved.version);
+    await listSessions();
+  } catch (err) {
+    root.dataset.saved = "failed";
+    if (err instanceof EngineError && err.failure.code === "conflict") {
+      banner(err.message + ".",
+        el("button", { type: "button", onclick: () => { banner(""); openSession(session.id); } }, "Load the other tab's version"),
+        el("button", { type: "button", onclick: async () => {
+          banner(""); session.id = ""; session.version = 0; session.title += " (copy)"; $("doc-title").value = session.title; await save();
+        } }, "Keep mine as a copy"));
+      return;
+    }
+    setStatus(`Not saved: ${explain(err)}. Use "Save session file" to keep your work.`, true);
+  }
+}
+
+async function listSessions() {
+  const list = await call("sessions");
+  $("sessions").replaceChildren(...list.map((s) => el("li", { class: s.id === session.id ? "current" : null },
+    el("button", { type: "button", class: "link", "aria-current": s.id === session.id ? "true" : null, onclick: () => openSession(s.id) }, s.title || "Untitled session"))));
+  return list;
+}
+
+async function listDatasets() {
+  const list = await call("datasets");
+  $("datasets").replaceChildren(...list.map((d) => el("li", {},
+    el("button", { type: "button", class: "link", onclick: () => showPreview(d.name) }, d.name))));
+}
+
+async function openSession(id) {
+  const s = await call("openSession", id);
+  Object.assign(session, { id: s.id, title: s.title, text: s.text, version: s.version });
+  $("doc-title").value = s.title;
+  const parts = await call("parts", s.text);
+  notebook.undo = []; notebook.redo = [];
+  await run(parts);
+  await listSessions();
+}
+
+async function newSession(title, text) {
+  Object.assign(session, { id: "", title, text, version: 0 });
+  $("doc-title").value = title;
+  notebook.undo = []; notebook.redo = [];
+  await run(await call("parts", text));
+  await save();
 }
 
 /** fetchBytes fetches one of our own files as bytes. */
 async function fetchBytes(path) {
   const res = await fetch(path);
-  if (!res.ok) {
-    throw new Error(`could not load ${path} (${res.status})`);
-  }
+  if (!res.ok) throw new Error(`could not load ${path} (${res.status})`);
   return new Uint8Array(await res.arrayBuffer());
 }
 
-/** loadDemo fetches the list of demo files and their contents. */
+/** loadDemo fetches the demo session and its files, before the engine is ready. */
 async function loadDemo() {
-  const res = await fetch("demo/files.txt");
-  if (!res.ok) {
-    throw new Error(`could not load the demo list (${res.status})`);
-  }
-  const names = (await res.text()).split("\n").map((s) => s.trim()).filter(Boolean);
-  return Promise.all(names.map(async (name) => ({ name, bytes: await fetchBytes("demo/" + name) })));
+  const [list, text] = await Promise.all([
+    fetch("demo/files.txt").then((r) => (r.ok ? r.text() : "")),
+    fetch("demo/demo.md").then((r) => (r.ok ? r.text() : "")),
+  ]);
+  const names = list.split("\n").map((s) => s.trim()).filter(Boolean);
+  const files = await Promise.all(names.map(async (name) => ({ name, bytes: await fetchBytes("demo/" + name) })));
+  return { text, files };
 }
 
-/** showDataset adds a dataset to the rail and its exhibits to the memo. */
-function showDataset(preview, counter) {
-  const list = document.getElementById("datasets");
-  list.append(el("li", {}, preview.name,
-    el("span", { class: "meta" }, `${preview.frequency}, ${preview.series.length} series`)));
-  const exhibits = document.getElementById("exhibits");
-  for (const s of preview.series) {
-    const n1 = ++counter.n;
-    exhibits.append(el("figure", { class: "exhibit", id: `exhibit-${n1}` },
-      el("h3", {}, el("span", { class: "num" }, `Exhibit ${n1}`), ` — ${s.name}, ${s.first} to ${s.last}`),
-      svgFragment(s.chart)));
-    const n2 = ++counter.n;
-    exhibits.append(el("figure", { class: "exhibit", id: `exhibit-${n2}` },
-      el("h3", {}, el("span", { class: "num" }, `Exhibit ${n2}`), ` — first rows of ${s.name}`),
-      figureTable([preview.dateColumn || "period", s.name], s.head,
-        `${s.count} values in ${preview.name}`)));
+/** sharedSteps returns the steps carried by a share link, or null. */
+function sharedSteps() {
+  const m = /^#steps=(.*)$/s.exec(location.hash);
+  if (!m) return null;
+  try {
+    return decodeURIComponent(m[1]);
+  } catch {
+    return null;
   }
-  if (preview.problems.length > 0) {
-    exhibits.append(el("ul", { class: "problems" },
-      ...preview.problems.map((p) => el("li", {}, p.text))));
-  }
+}
+
+/** openShared starts a new session from the steps a link carried. */
+async function openShared(steps) {
+  await newSession("Shared steps", "```quill\n" + steps + "\n```\n");
+  setStatus("Opened steps from a link. It carried no data: attach the files the load steps name.");
+}
+
+function shareLink() {
+  const steps = session.parts.filter((p) => p.kind === "steps").map((p) => p.lines.map((l) => l.text).join("\n")).join("\n");
+  return `${location.origin}${location.pathname}#steps=${encodeURIComponent(steps)}`;
+}
+
+function download(name, type, body) {
+  const url = URL.createObjectURL(new Blob([body], { type }));
+  const a = el("a", { href: url, download: name });
+  document.body.append(a);
+  a.click();
+  a.remove();
+  setTimeout(() => URL.revokeObjectURL(url), 1000);
+}
+
+function fileName(title, ext) {
+  return (title || "session").replace(/[^\p{L}\p{N} _-]+/gu, "").trim().replace(/\s+/g, "-").toLowerCase() + ext;
+}
+
+function wire() {
+  $("doc-title").addEventListener("change", () => { session.title = $("doc-title").value; scheduleSave(); });
+  $("add-step").addEventListener("click", () => notebook.addStep());
+  $("add-note").addEventListener("click", () => notebook.addNote());
+  $("new-session").addEventListener("click", () => newSession("Untitled session", "```quill\n```\n").catch((e) => setStatus(explain(e), true)));
+  $("copy-session").addEventListener("click", async () => {
+    if (!session.id) return;
+    const s = await call("duplicateSession", session.id, `${session.title} (copy)`);
+    await openSession(s.id);
+  });
+  $("delete-session").addEventListener("click", async () => {
+    if (!session.id || !confirm(`Delete the session "${session.title}"? Its datasets stay.`)) return;
+    await call("deleteSession", session.id);
+    const list = await listSessions();
+    if (list.length > 0) await openSession(list[0].id);
+    else await newSession("Untitled session", "```quill\n```\n");
+  });
+  $("file-input").addEventListener("change", async (e) => {
+    await attachFiles([...e.target.files], afterAttach);
+    e.target.value = "";
+  });
+  $("import-input").addEventListener("change", async (e) => {
+    const f = e.target.files[0];
+    e.target.value = "";
+    if (f) await newSession(f.name.replace(/\.(md|txt)$/i, ""), await f.text());
+  });
+  $("export-session").addEventListener("click", () => download(fileName(session.title, ".md"), "text/markdown", session.text));
+  $("share").addEventListener("click", async () => {
+    const link = shareLink();
+    const box = $("share-link");
+    box.value = link;
+    box.hidden = false;
+    box.select();
+    try { await navigator.clipboard.writeText(link); setStatus("Link copied. It carries the steps only, never the data."); } catch { setStatus("Copy the selected link. It carries the steps only, never the data."); }
+  });
+  $("forget").addEventListener("click", () => $("forget-dialog").showModal());
+  $("forget-dialog").addEventListener("close", async () => {
+    if ($("forget-dialog").returnValue !== "forget") return;
+    await call("forgetAll");
+    await listDatasets();
+    await newSession("Untitled session", "```quill\n```\n");
+    setStatus("Every session and dataset was removed from this browser.");
+  });
+  $("help-toggle").addEventListener("click", () => toggleHelp());
+  document.addEventListener("keydown", (e) => {
+    if (e.key === "F2") { e.preventDefault(); toggleHelp(); }
+    const t = e.target;
+    if (t.tagName === "INPUT" || t.tagName === "TEXTAREA") return;
+    if ((e.ctrlKey || e.metaKey) && e.key.toLowerCase() === "z") { e.preventDefault(); if (e.shiftKey) notebook.redoLast(); else notebook.undoLast(); }
+    if ((e.ctrlKey || e.metaKey) && e.key.toLowerCase() === "y") { e.preventDefault(); notebook.redoLast(); }
+  });
+  document.addEventListener("dragover", (e) => { e.preventDefault(); root.classList.add("dropping"); });
+  document.addEventListener("dragleave", () => root.classList.remove("dropping"));
+  document.addEventListener("drop", async (e) => {
+    e.preventDefault();
+    root.classList.remove("dropping");
+    await attachFiles([...e.dataTransfer.files], afterAttach);
+  });
+  document.addEventListener("paste", async (e) => {
+    const t = e.target;
+    if (t.tagName === "INPUT" || t.tagName === "TEXTAREA") return;
+    const text = e.clipboardData.getData("text/plain");
+    if (text) { e.preventDefault(); await attachPaste(text, afterAttach); }
+  });
+  window.addEventListener("hashchange", () => {
+    const shared = sharedSteps();
+    if (shared === null || root.dataset.state !== "ready") return;
+    history.replaceState(null, "", location.pathname);
+    openShared(shared).catch((e) => setStatus(explain(e), true));
+  });
+  document.addEventListener("quillcast-storage-closed", () => banner("Quillcast was updated in another tab. Reload this page to keep saving."));
+}
+
+async function afterAttach() {
+  await listDatasets();
+  await run(notebook.parts);
+}
+
+function toggleHelp() {
+  const panel = $("help-panel");
+  panel.hidden = !panel.hidden;
+  $("help-toggle").setAttribute("aria-expanded", String(!panel.hidden));
+  if (!panel.hidden) { showHelp(panel); panel.focus(); }
 }
 
 async function main() {
-  const root = document.documentElement;
+  wire();
   try {
     const [, demo] = await Promise.all([start(fetch("quillcast.wasm")), loadDemo()]);
-    setStatus("Reading the demo data…");
-    const counter = { n: 0 };
-    for (const file of demo) {
-      showDataset(await call("attach", file.bytes, file.name), counter);
+    const store = await call("storage");
+    $("storage-note").textContent = store.kind === "IndexedDB"
+      ? "Sessions and datasets are kept in this browser's storage on this computer."
+      : store.note;
+    if (navigator.storage && navigator.storage.persist) {
+      navigator.storage.persist().then((granted) => {
+        $("storage-note").textContent += granted ? " The browser agreed to keep them." : " The browser may clear them when space runs low; save session files for safekeeping.";
+      });
     }
-    setStatus("Ready. Everything runs on this computer.");
+    const shared = sharedSteps();
+    const known = await listSessions();
+    await listDatasets();
+    if (shared !== null) {
+      history.replaceState(null, "", location.pathname);
+      await openShared(shared);
+    } else if (known.length > 0) {
+      await openSession(known[0].id);
+    } else {
+      for (const f of demo.files) await call("attach", f.bytes, f.name);
+      await listDatasets();
+      await newSession("Demo: Wickery candle orders", demo.text || "```quill\n```\n");
+    }
     root.dataset.state = "ready";
   } catch (err) {
     const where = err instanceof EngineError && err.failure.line ? ` (line ${err.failure.line})` : "";
-    setStatus(`Could not start: ${err.message}${where}`, true);
+    setStatus(`Could not start: ${explain(err)}${where}`, true);
     root.dataset.state = "failed";
   }
 }

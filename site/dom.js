@@ -46,3 +46,14 @@ export function figureTable(header, rows, caption) {
     ...r.map((c, i) => (i === 0 ? el("th", { scope: "row" }, c) : el("td", { class: "num" }, c)))))));
   return table;
 }
+
+/** engineTable builds a table the engine sent: headers, rows, alignment. */
+export function engineTable(t) {
+  const right = t.right || [];
+  const table = el("table", { class: "figures" });
+  table.append(el("thead", {}, el("tr", {},
+    ...t.headers.map((h, i) => el("th", { scope: "col", class: right[i] ? "num" : null }, h)))));
+  table.append(el("tbody", {}, ...t.rows.map((r) => el("tr", {},
+    ...r.map((c, i) => el("td", { class: right[i] ? "num" : null }, c))))));
+  return table;
+}

@@ -3,6 +3,7 @@
 package main
 
 import (
+	"fmt"
 	"syscall/js"
 
 	"quillcast/core/chart"
@@ -26,6 +27,7 @@ type preview struct {
 	Problems   []problem       `json:"problems"`
 	Changes    []string        `json:"changes"`
 	Series     []seriesPreview `json:"series"`
+	NotStored  string          `json:"notStored,omitempty"` // why the file was not kept in the browser
 }
 
 // problem is one [series.Problem] as the page lists it.
@@ -50,7 +52,8 @@ type seriesPreview struct {
 }
 
 // attach(bytes Uint8Array, name string) reads a data file and keeps it under
-// its name, replacing an earlier file of the same name. It answers with a
+// its name, in the engine and in the browser's store, replacing an earlier
+// file of the same name. It answers with a
 // [preview]; a file that cannot be read at all answers with the error and
 // its line and column.
 func (a *app) attach(args []js.Value) (any, error) {
@@ -62,6 +65,13 @@ func (a *app) attach(args []js.Value) (any, error) {
 	if err != nil {
 		return nil, err
 	}
+	// Keep the bytes even when the default reading fails: a load step with
+	// the right options (date order, decimal mark) may still read them.
+	a.openStore()
+	a.mu.Lock()
+	a.files[name] = data
+	a.mu.Unlock()
+	_, storeErr := a.sets.Put(name, data)
 	ds, err := series.Read(data, name, series.ReadOptions{})
 	if err != nil {
 		return nil, err
@@ -69,7 +79,11 @@ func (a *app) attach(args []js.Value) (any, error) {
 	a.mu.Lock()
 	a.datasets[name] = ds
 	a.mu.Unlock()
-	return previewOf(ds), nil
+	p := previewOf(ds)
+	if storeErr != nil {
+		p.NotStored = "This file is attached for now but was not stored in the browser: " + storeErr.Error()
+	}
+	return p, nil
 }
 
 // previewOf describes a dataset for the page.
@@ -124,4 +138,24 @@ func seriesPreviewOf(s *series.Series, dateColumn string) seriesPreview {
 		sp.First, sp.Last = labels[0], labels[len(labels)-1]
 	}
 	return sp
+}
+
+// preview(name string) reads an attached file again with default options
+// and answers with a [preview].
+func (a *app) preview(args []js.Value) (any, error) {
+	name, err := stringArg(args, 0, "the dataset name")
+	if err != nil {
+		return nil, err
+	}
+	a.mu.Lock()
+	data, ok := a.files[name]
+	a.mu.Unlock()
+	if !ok {
+		return nil, fmt.Errorf("no file named %q is attached; attach it again", name)
+	}
+	ds, err := series.Read(data, name, series.ReadOptions{})
+	if err != nil {
+		return nil, err
+	}
+	return previewOf(ds), nil
 }

@@ -6,6 +6,8 @@ import (
 	"errors"
 
 	"quillcast/core/series"
+	"quillcast/core/steps"
+	"quillcast/wasm/store"
 )
 
 // Failure is an error as the page receives it: a message in plain words and,
@@ -14,6 +16,7 @@ import (
 // Problems lists every error when one answer found several.
 type Failure struct {
 	Message  string    `json:"message"`
+	Code     string    `json:"code,omitempty"` // "conflict" when another tab saved a newer version
 	Step     int       `json:"step,omitempty"`
 	Line     int       `json:"line,omitempty"`
 	Column   int       `json:"column,omitempty"`
@@ -23,6 +26,14 @@ type Failure struct {
 // failureOf turns an error into the data the page shows.
 func failureOf(err error) Failure {
 	f := Failure{Message: err.Error()}
+	if errors.Is(err, store.ErrConflict) {
+		f.Code = "conflict"
+	}
+	var se *steps.Error
+	if errors.As(err, &se) {
+		f.Step, f.Line, f.Column = se.Step, se.Line, se.Column
+		return f
+	}
 	var list series.ErrorList
 	if errors.As(err, &list) {
 		for _, e := range list {

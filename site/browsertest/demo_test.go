@@ -19,9 +19,12 @@ func TestDemoPage(t *testing.T) {
 		name string
 		expr string
 	}{
-		{"chart drawn by the engine", `document.querySelectorAll('#exhibits svg.qc').length`},
-		{"table of first rows", `document.querySelectorAll('#exhibits table.figures tbody tr').length`},
+		{"chart drawn by the engine", `document.querySelectorAll('#parts svg.qc').length`},
+		{"table of first rows", `document.querySelectorAll('#parts table.figures tbody tr').length`},
 		{"dataset listed in the rail", `document.querySelectorAll('#datasets li').length`},
+		{"session listed in the rail", `document.querySelectorAll('#sessions li').length`},
+		{"step lines with their verb marked", `document.querySelectorAll('#parts code.line .verb').length`},
+		{"numbered exhibits", `document.querySelectorAll('#parts figure.exhibit h3 .num').length`},
 	}
 	for _, c := range checks {
 		if n := eval[int](p, c.expr); n == 0 {
@@ -30,7 +33,7 @@ func TestDemoPage(t *testing.T) {
 	}
 	// The chart's own style sheet must apply under the page's policy: the
 	// background rectangle takes its fill from it.
-	if fill := eval[string](p, `(() => { const r = document.querySelector('#exhibits svg.qc .qc-bg'); return r ? getComputedStyle(r).fill : 'none'; })()`); fill == "none" || fill == "" {
+	if fill := eval[string](p, `(() => { const r = document.querySelector('#parts svg.qc .qc-bg'); return r ? getComputedStyle(r).fill : 'none'; })()`); fill == "none" || fill == "" {
 		t.Errorf("the chart's style sheet did not apply (background fill %q)", fill)
 	}
 	p.checkClean(ready)

@@ -198,21 +198,20 @@ func (p *page) statusText() string {
 	return s
 }
 
-// open navigates to the site (plus a path or fragment) and waits until the
-// page says it is ready: the engine signalled ready and the first render is
+// open navigates to the site (plus rel, a path and fragment as written in
+// a link) from a blank page, and waits until the page says it is ready: the engine signalled ready and the first render is
 // done.
 func (p *page) open(rel string) time.Time {
 	p.t.Helper()
-	u := p.base.ResolveReference(&url.URL{Path: strings.SplitN(rel, "#", 2)[0]})
-	if i := strings.IndexByte(rel, '#'); i >= 0 {
-		u.Fragment = rel[i+1:]
-	}
-	p.run("opening "+u.String(), 60*time.Second,
-		chromedp.Navigate(u.String()),
+	u := p.base.String() + rel
+	p.run("opening "+u, 60*time.Second,
+		chromedp.EmulateViewport(1366, 768),
+		chromedp.Navigate("about:blank"),
+		chromedp.Navigate(u),
 		chromedp.WaitReady(chromedp.CSS(`html[data-state="ready"],html[data-state="failed"]`)),
 	)
 	if state := eval[string](p, `document.documentElement.dataset.state`); state != "ready" {
-		p.fail("opening "+u.String(), fmt.Errorf("the page did not start (state %q)", state))
+		p.fail("opening "+u, fmt.Errorf("the page did not start (state %q)", state))
 	}
 	return time.Now()
 }
@@ -237,7 +236,7 @@ func (p *page) requestsSince(t time.Time) []request {
 	return out
 }
 
-// screenshot saves a full-page PNG under build/screenshots/.
+// screenshot saves a PNG of the 1366×768 viewport under build/screenshots/.
 func (p *page) screenshot(name string) {
 	p.t.Helper()
 	dir := filepath.Join(moduleRoot(p.t), "build", "screenshots")
@@ -247,7 +246,7 @@ func (p *page) screenshot(name string) {
 	}
 	ctx, cancel := context.WithTimeout(p.ctx, 15*time.Second)
 	defer cancel()
-	png, err := chromedp.Run(ctx, chromedp.FullScreenshot(100))
+	png, err := chromedp.Run(ctx, chromedp.CaptureScreenshot())
 	if err != nil {
 		p.t.Logf("screenshot %s: %v", name, err)
 		return

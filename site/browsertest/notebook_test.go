@@ -1,0 +1,113 @@
+package browsertest
+
+import (
+	"context"
+	"fmt"
+	"os"
+	"path/filepath"
+	"strings"
+	"testing"
+	"time"
+
+	"github.com/chromedp/chromedp"
+)
+
+// stepSelector finds the first step line starting with prefix and returns
+// the CSS selector of its code element.
+func stepSelector(p *page, prefix string) string {
+	p.t.Helper()
+	sel := eval[string](p, fmt.Sprintf(`(() => {
+		const c = [...document.querySelectorAll('#parts code.line')].find(n => n.textContent.startsWith(%q));
+		return c ? 'code.line[data-part="' + c.dataset.part + '"][data-line="' + c.dataset.line + '"]' : '';
+	})()`, prefix))
+	if sel == "" {
+		p.fail("finding the step "+prefix, fmt.Errorf("no step line starts with %q", prefix))
+	}
+	return sel
+}
+
+// outputText returns the text of the output under a step line.
+func outputText(p *page, sel string) string {
+	return eval[string](p, fmt.Sprintf(`(() => { const c = document.querySelector(%q); const o = c && c.closest('.step').querySelector('.output'); return o ? o.textContent : ''; })()`, sel))
+}
+
+// waitFor polls a JavaScript condition until it holds.
+func waitFor(p *page, what, cond string) {
+	p.t.Helper()
+	ctx, cancel := context.WithTimeout(p.ctx, 30*time.Second)
+	defer cancel()
+	if _, err := chromedp.Run(ctx, chromedp.Poll[bool](cond, chromedp.WithPollingInterval(50*time.Millisecond))); err != nil {
+		p.fail("waiting for "+what, err)
+	}
+}
+
+// TestNotebook walks through a working day: edit a step and see its output
+// change, find the session again after a reload, attach a file through the
+// picker, and open a link that carries the steps.
+func TestNotebook(t *testing.T) {
+	p := openSite(t)
+	ready := p.open("")
+
+	// Edit a step: its output must change and the session must be saved.
+	sel := stepSelector(p, "smooth centered width=12")
+	before := outputText(p, sel)
+	if before == "" {
+		t.Fatal("the smoothing step shows no output")
+	}
+	p.run("editing the smoothing step", 20*time.Second,
+		chromedp.Click(chromedp.CSS(sel)),
+		chromedp.WaitVisible(chromedp.CSS("input.line-edit")),
+		chromedp.SetValue(chromedp.CSS("input.line-edit"), "smooth centered width=4"),
+		chromedp.KeyEvent("\r"),
+	)
+	waitFor(p, "the edited step's output", `[...document.querySelectorAll('#parts code.line')].some(n => n.textContent === 'smooth centered width=4')`)
+	sel = stepSelector(p, "smooth centered width=4")
+	waitFor(p, "the new output", fmt.Sprintf(`(() => { const c = document.querySelector(%q); const o = c && c.closest('.step').querySelector('.output'); return o && o.textContent !== %q; })()`, sel, before))
+	waitFor(p, "the autosave", `/^[0-9]+$/.test(document.documentElement.dataset.saved || '') && Number(document.documentElement.dataset.saved) >= 2`)
+	p.screenshot("edited-step")
+	p.checkClean(ready)
+
+	// Reload: the edited session comes back, outputs included.
+	ready = p.open("")
+	sel = stepSelector(p, "smooth centered width=4")
+	if outputText(p, sel) == "" {
+		t.Error("after a reload the edited step shows no output")
+	}
+	p.checkClean(ready)
+
+	// Attach a file through the picker: it is listed and previewed.
+	csv := filepath.Join(t.TempDir(), "harbour-weekly.csv")
+	var b strings.Builder
+	b.WriteString("week;orders\n")
+	for w := 1; w <= 30; w++ {
+		fmt.Fprintf(&b, "2024-W%02d;%d,5\n", w, 100+w*3%17)
+	}
+	if err := os.WriteFile(csv, []byte(b.String()), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	p.run("attaching a file", 20*time.Second, chromedp.SetUploadFiles(chromedp.CSS("#file-input"), []string{csv}))
+	waitFor(p, "the attached dataset in the rail", `[...document.querySelectorAll('#datasets li')].some(n => n.textContent === 'harbour-weekly.csv')`)
+	waitFor(p, "the preview", `document.getElementById('preview-dialog').open && document.querySelectorAll('#preview-body svg.qc').length > 0`)
+	p.screenshot("attached-file")
+	p.run("closing the preview", 10*time.Second, chromedp.Click(chromedp.CSS("#preview-dialog button")))
+	p.checkClean(ready)
+
+	// Share: the link carries the steps only and opens as a new session.
+	p.run("making a share link", 10*time.Second, chromedp.Click(chromedp.CSS("#share")))
+	link := eval[string](p, `document.getElementById('share-link').value`)
+	if !strings.Contains(link, "#steps=") || strings.Contains(link, "2017-01") {
+		t.Fatalf("share link %q should carry steps and no data", link)
+	}
+	ready = p.open(link[strings.Index(link, "#"):])
+	if got := eval[string](p, `document.getElementById('doc-title').value`); got != "Shared steps" {
+		t.Errorf("a share link opened the session %q, want a new one titled %q", got, "Shared steps")
+	}
+	if n := eval[int](p, `document.querySelectorAll('#parts code.line .verb').length`); n < 5 {
+		t.Errorf("the shared session shows %d steps, want the demo's steps", n)
+	}
+	if loc := eval[string](p, `location.hash`); loc != "" {
+		t.Errorf("after opening, the link's steps stay in the address (%q)", loc)
+	}
+	p.screenshot("shared-link")
+	p.checkClean(ready)
+}

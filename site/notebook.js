@@ -1,0 +1,326 @@
+// The memo draft in the centre of the page: prose notes and step lines in
+// document order, each step followed by its output as numbered exhibits.
+// The notebook edits text only; running, numbering and formatting are the
+// engine's work.
+
+import { el, svgFragment, engineTable } from "./dom.js";
+
+/** Notebook renders session parts and turns edits into change events. */
+export class Notebook {
+  constructor(root, { onChange, complete }) {
+    this.root = root;
+    this.onChange = onChange; // called with new parts after every edit
+    this.complete = complete; // (line, column) => suggestions
+    this.parts = [];
+    this.outputs = new Map(); // document line -> output
+    this.undo = [];
+    this.redo = [];
+    root.addEventListener("keydown", (e) => this.onKey(e));
+  }
+
+  /** show replaces the parts and outputs and redraws, keeping the focus. */
+  show(parts, outputs) {
+    const focus = this.focusedPlace();
+    this.parts = parts;
+    this.outputs = new Map((outputs || []).map((o) => [o.line, o]));
+    this.render();
+    if (focus) this.focusPlace(focus.part, focus.line, focus.editing);
+  }
+
+  /** change records an undo point and hands the new parts on. */
+  change(parts, focus) {
+    this.undo.push(JSON.stringify(this.parts));
+    if (this.undo.length > 200) this.undo.shift();
+    this.redo = [];
+    this.parts = parts;
+    this.render();
+    if (focus) this.focusPlace(focus.part, focus.line, focus.editing);
+    this.onChange(parts);
+  }
+
+  undoLast() {
+    if (this.undo.length === 0) return;
+    this.redo.push(JSON.stringify(this.parts));
+    this.parts = JSON.parse(this.undo.pop());
+    this.render();
+    this.onChange(this.parts);
+  }
+
+  redoLast() {
+    if (this.redo.length === 0) return;
+    this.undo.push(JSON.stringify(this.parts));
+    this.parts = JSON.parse(this.redo.pop());
+    this.render();
+    this.onChange(this.parts);
+  }
+
+  clone() {
+    return JSON.parse(JSON.stringify(this.parts));
+  }
+
+  render() {
+    const nodes = [];
+    this.parts.forEach((p, i) => {
+      if (p.kind === "prose") nodes.push(this.prose(p, i));
+      else if (p.kind === "steps") nodes.push(this.stepsBlock(p, i));
+      else if (p.kind === "data") {
+        nodes.push(el("p", { class: "embedded" }, `Embedded data: ${p.name}`));
+      }
+    });
+    this.root.replaceChildren(...nodes);
+  }
+
+  prose(p, i) {
+    const view = el("div", { class: "prose", tabindex: "0", "data-part": i, "aria-label": "Note; press Enter to edit" });
+    for (const para of p.text.split(/\n\s*\n/)) {
+      const t = para.trim();
+      if (!t) continue;
+      const heading = /^(#{1,6})\s+(.*)$/.exec(t);
+      view.append(heading ? el(`h${Math.min(heading[1].length + 1, 6)}`, {}, heading[2]) : el("p", {}, t));
+    }
+    view.addEventListener("click", () => this.editProse(i));
+    return view;
+  }
+
+  editProse(i) {
+    const view = this.root.querySelector(`.prose[data-part="${i}"]`);
+    if (!view) return;
+    const area = el("textarea", { class: "prose-edit", "data-part": i, "aria-label": "Note text (markdown); Escape to finish", rows: 6 });
+    area.value = this.parts[i].text;
+    const finish = () => {
+      if (!area.isConnected) return;
+      if (area.value !== this.parts[i].text) {
+        const parts = this.clone();
+        parts[i].text = area.value;
+        this.change(parts, { part: i, line: -1 });
+      } else {
+        this.render();
+        this.focusPlace(i, -1, false);
+      }
+    };
+    area.addEventListener("keydown", (e) => {
+      if (e.key === "Escape") { e.preventDefault(); e.stopPropagation(); finish(); }
+    });
+    area.addEventListener("blur", finish);
+    view.replaceWith(area);
+    area.focus();
+  }
+
+  stepsBlock(p, i) {
+    const block = el("div", { class: "steps", "data-part": i });
+    p.lines.forEach((line, j) => block.append(this.stepRow(line, i, j)));
+    return block;
+  }
+
+  stepRow(line, i, j) {
+    const out = this.outputs.get(line.line);
+    const row = el("div", { class: "step", "data-part": i, "data-line": j });
+    const code = el("code", {
+      class: "line" + (out && out.status !== "done" ? " " + out.status : ""),
+      tabindex: "0",
+      "data-part": i,
+      "data-line": j,
+      "aria-label": `Step line: ${line.text || "empty"}. Press Enter to edit.`,
+    });
+    code.append(...this.lineMarkup(line.text, out));
+    code.addEventListener("click", () => this.editStep(i, j));
+    row.append(el("span", { class: "gutter", "aria-hidden": "true" }, out ? String(out.step) : ""), code);
+    if (out) row.append(this.outputOf(out));
+    return row;
+  }
+
+  /** lineMarkup marks the verb the engine found and any error column. */
+  lineMarkup(text, out) {
+    if (!text) return [el("span", { class: "empty" }, "(empty step)")];
+    const chars = Array.from(text);
+    const col = out && out.error && out.error.column > 0 ? out.error.column : 0;
+    const verbLen = out && out.verb && text.trimStart().startsWith(out.verb) ? Array.from(out.verb).length : 0;
+    const lead = chars.length - Array.from(text.trimStart()).length;
+    const nodes = [];
+    let i = 0;
+    if (verbLen > 0) {
+      if (lead > 0) nodes.push(chars.slice(0, lead).join(""));
+      nodes.push(el("span", { class: "verb" }, chars.slice(lead, lead + verbLen).join("")));
+      i = lead + verbLen;
+    }
+    if (col > 0 && col - 1 >= i && col - 1 <= chars.length) {
+      nodes.push(chars.slice(i, col - 1).join(""));
+      let end = col - 1;
+      while (end < chars.length && chars[end] !== " ") end++;
+      nodes.push(el("mark", { class: "error-at", title: out.error.message }, chars.slice(col - 1, Math.max(end, col)).join("") || " "));
+      nodes.push(chars.slice(Math.max(end, col)).join(""));
+    } else {
+      nodes.push(chars.slice(i).join(""));
+    }
+    return nodes;
+  }
+
+  outputOf(out) {
+    const box = el("div", { class: "output" });
+    if (out.status === "failed" && out.error) {
+      const where = out.error.line ? `Line ${out.error.line}, column ${out.error.column}: ` : "";
+      box.append(el("p", { class: "msg error", role: "note" }, where + out.error.message));
+    }
+    if (out.status === "waiting") {
+      box.append(el("p", { class: "msg waiting" }, `Waits on step ${out.waitsOn}, which has a problem.`));
+    }
+    for (const b of out.blocks || []) {
+      if (b.kind === "message") {
+        box.append(el("p", { class: `msg ${b.level || "info"}` }, b.text));
+        continue;
+      }
+      const fig = el("figure", { class: "exhibit", id: `exhibit-${b.exhibit}` },
+        el("h3", {}, el("span", { class: "num" }, `Exhibit ${b.exhibit}`), ` — ${b.title}`));
+      if (b.kind === "chart") fig.append(svgFragment(b.svg));
+      if (b.kind === "table" && b.table) fig.append(engineTable(b.table));
+      if (b.text) fig.append(el("figcaption", {}, b.text));
+      box.append(fig);
+    }
+    return box;
+  }
+
+  editStep(i, j) {
+    const code = this.root.querySelector(`code.line[data-part="${i}"][data-line="${j}"]`);
+    if (!code) return;
+    const wrap = el("div", { class: "edit" });
+    const input = el("input", {
+      class: "line-edit", "data-part": i, "data-line": j, spellcheck: "false", autocomplete: "off",
+      "aria-label": "Step line; Enter runs it, Escape cancels, Tab completes",
+    });
+    input.value = this.parts[i].lines[j].text;
+    const list = el("ul", { class: "suggest", role: "listbox", "aria-label": "Completions" });
+    wrap.append(input, list);
+    let done = false;
+    const apply = (then) => {
+      if (done) return;
+      done = true;
+      const parts = this.clone();
+      const changed = parts[i].lines[j].text !== input.value;
+      parts[i].lines[j].text = input.value;
+      if (then) then(parts);
+      else if (changed) this.change(parts, { part: i, line: j });
+      else { this.render(); this.focusPlace(i, j, false); }
+    };
+    const suggest = () => {
+      const col = Array.from(input.value.slice(0, input.selectionStart)).length + 1;
+      const items = this.complete(input.value, col) || [];
+      list.replaceChildren(...items.slice(0, 8).map((s, k) => el("li", { role: "option", "aria-selected": k === 0 ? "true" : "false" },
+        el("code", {}, s.label), " ", el("span", { class: "detail" }, s.detail))));
+      list.items = items;
+    };
+    input.addEventListener("input", suggest);
+    input.addEventListener("keydown", (e) => {
+      e.stopPropagation();
+      if (e.key === "Escape") { done = true; this.render(); this.focusPlace(i, j, false); e.preventDefault(); return; }
+      if (e.key === "Enter" && (e.ctrlKey || e.metaKey || e.shiftKey)) {
+        e.preventDefault();
+        apply((parts) => { parts[i].lines.splice(j + 1, 0, { text: "", line: 0 }); this.change(parts, { part: i, line: j + 1, editing: true }); });
+        return;
+      }
+      if (e.key === "Enter") { e.preventDefault(); apply(); return; }
+      if (e.key === "Tab" && list.items && list.items.length > 0) {
+        e.preventDefault();
+        const s = list.items[0];
+        const chars = Array.from(input.value);
+        input.value = chars.slice(0, s.from - 1).join("") + s.text + chars.slice(s.to - 1).join("");
+        const caret = Array.from(chars.slice(0, s.from - 1).join("") + s.text).join("").length;
+        input.setSelectionRange(caret, caret);
+        suggest();
+        return;
+      }
+      if (e.key === "ArrowUp" || e.key === "ArrowDown") {
+        e.preventDefault();
+        const to = this.neighbour(i, j, e.key === "ArrowUp" ? -1 : 1);
+        apply((parts) => {
+          if (parts[i].lines[j].text !== this.parts[i].lines[j].text) this.change(parts, to ? { ...to, editing: true } : null);
+          else { this.render(); if (to) this.focusPlace(to.part, to.line, true); }
+        });
+      }
+    });
+    input.addEventListener("blur", () => setTimeout(() => { if (!done && !wrap.contains(document.activeElement)) apply(); }, 0));
+    code.replaceWith(wrap);
+    input.focus();
+    suggest();
+  }
+
+  /** neighbour returns the step line dir steps away across blocks. */
+  neighbour(i, j, dir) {
+    const places = [];
+    this.parts.forEach((p, pi) => { if (p.kind === "steps") p.lines.forEach((_, li) => places.push({ part: pi, line: li })); });
+    const k = places.findIndex((x) => x.part === i && x.line === j);
+    return places[k + dir] || null;
+  }
+
+  focusedPlace() {
+    const a = document.activeElement;
+    if (!a || !this.root.contains(a) || a.dataset.part === undefined) return null;
+    return { part: Number(a.dataset.part), line: a.dataset.line === undefined ? -1 : Number(a.dataset.line), editing: a.tagName === "INPUT" };
+  }
+
+  focusPlace(i, j, editing) {
+    if (j < 0) {
+      const n = this.root.querySelector(`.prose[data-part="${i}"]`);
+      if (n) n.focus();
+      return;
+    }
+    if (editing) { this.editStep(i, j); return; }
+    const n = this.root.querySelector(`code.line[data-part="${i}"][data-line="${j}"]`);
+    if (n) n.focus();
+  }
+
+  /** addStep appends an empty step line (to the last steps block) and edits it. */
+  addStep() {
+    const parts = this.clone();
+    let i = parts.map((p) => p.kind).lastIndexOf("steps");
+    if (i < 0) { parts.push({ kind: "steps", lines: [] }); i = parts.length - 1; }
+    parts[i].lines.push({ text: "", line: 0 });
+    this.undo.push(JSON.stringify(this.parts));
+    this.parts = parts;
+    this.render();
+    this.editStep(i, parts[i].lines.length - 1);
+  }
+
+  addNote() {
+    const parts = this.clone();
+    parts.push({ kind: "prose", text: "A note for the memo." });
+    this.change(parts, null);
+    this.editProse(parts.length - 1);
+  }
+
+  onKey(e) {
+    const t = e.target;
+    if (t.tagName === "INPUT" || t.tagName === "TEXTAREA") return;
+    if (t.classList.contains("prose") && e.key === "Enter") { e.preventDefault(); this.editProse(Number(t.dataset.part)); return; }
+    if (!t.classList.contains("line")) return;
+    const i = Number(t.dataset.part), j = Number(t.dataset.line);
+    if (e.key === "Enter" && (e.ctrlKey || e.metaKey)) {
+      e.preventDefault();
+      const parts = this.clone();
+      parts[i].lines.splice(j + 1, 0, { text: "", line: 0 });
+      this.undo.push(JSON.stringify(this.parts));
+      this.parts = parts;
+      this.render();
+      this.editStep(i, j + 1);
+    } else if (e.key === "Enter") {
+      e.preventDefault();
+      this.editStep(i, j);
+    } else if ((e.key === "ArrowUp" || e.key === "ArrowDown") && e.altKey) {
+      e.preventDefault();
+      const k = j + (e.key === "ArrowUp" ? -1 : 1);
+      if (k < 0 || k >= this.parts[i].lines.length) return;
+      const parts = this.clone();
+      [parts[i].lines[j], parts[i].lines[k]] = [parts[i].lines[k], parts[i].lines[j]];
+      this.change(parts, { part: i, line: k });
+    } else if (e.key === "ArrowUp" || e.key === "ArrowDown") {
+      e.preventDefault();
+      const to = this.neighbour(i, j, e.key === "ArrowUp" ? -1 : 1);
+      if (to) this.focusPlace(to.part, to.line, false);
+    } else if (e.key === "Delete") {
+      e.preventDefault();
+      const parts = this.clone();
+      parts[i].lines.splice(j, 1);
+      const to = parts[i].lines.length > 0 ? { part: i, line: Math.min(j, parts[i].lines.length - 1) } : null;
+      this.change(parts, to);
+    }
+  }
+}
