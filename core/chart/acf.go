@@ -90,7 +90,15 @@ func (a ACF) SVG() string {
 
 func (a ACF) describe(hasBound bool) string {
 	var d strings.Builder
-	d.WriteString("Autocorrelation bars for lags 1 to " + strconv.Itoa(len(a.Values)) + ".")
+	switch len(a.Values) {
+	case 0:
+		d.WriteString("Autocorrelation bars: no lags to show.")
+		return d.String()
+	case 1:
+		d.WriteString("Autocorrelation bar for lag 1.")
+	default:
+		d.WriteString("Autocorrelation bars for lags 1 to " + strconv.Itoa(len(a.Values)) + ".")
+	}
 	if hasBound {
 		var outside []string
 		for i, v := range a.Values {

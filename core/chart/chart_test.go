@@ -81,6 +81,7 @@ func goldenCases() []struct {
 			Values: []float64{0.62, 0.35, 0.12, -0.05, -0.21, -0.33, -0.2, -0.04, 0.1, 0.28, 0.41, 0.55},
 			Bound:  0.283,
 		}},
+		{"acf-empty", ACF{}},
 		{"panels-decomposition", Panels{
 			Frame:   Frame{Title: "Orders in four parts", XTitle: "month"},
 			Periods: monthLabels(2020, 48),

@@ -32,7 +32,10 @@
 // applied by CSS classes (prefix "qc-") and an embedded style sheet with a
 // dark-scheme variant, so the same SVG reads inline in the page and in a
 // standalone memo. Every coloured line also has its own dash pattern and
-// marker shape, so nothing depends on telling hues apart.
+// marker shape, so nothing depends on telling hues apart. A host page may
+// restyle the classes: qc-c0…qc-c5 (stroke) and qc-f0…qc-f5 (fill) for the
+// six series colours, qc-ink and qc-text for the text colour, qc-muted,
+// qc-grid and qc-axis for the furniture, qc-bg for the background.
 //
 // # Safety
 //
