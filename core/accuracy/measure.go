@@ -86,6 +86,15 @@ func (m Measure) String() string {
 	return measureInfo[m].name
 }
 
+// Label returns the measure's abbreviation as printed in table headings
+// and reasons: "ME", "RMSE", "sMAPE", "MASE".
+func (m Measure) Label() string {
+	if !m.Valid() {
+		return m.String()
+	}
+	return label(m)
+}
+
 // Title returns the measure's full name with its abbreviation, for table
 // headings: "Root mean squared error (RMSE)".
 func (m Measure) Title() string {

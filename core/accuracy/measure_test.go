@@ -10,18 +10,19 @@ func TestMeasureNames(t *testing.T) {
 	tests := []struct {
 		m      Measure
 		name   string
+		label  string
 		title  string
 		signed bool
 		pct    bool
 	}{
-		{ME, "me", "Mean error (ME)", true, false},
-		{MAE, "mae", "Mean absolute error (MAE)", false, false},
-		{MSE, "mse", "Mean squared error (MSE)", false, false},
-		{RMSE, "rmse", "Root mean squared error (RMSE)", false, false},
-		{MAPE, "mape", "Mean absolute percentage error (MAPE)", false, true},
-		{MPE, "mpe", "Mean percentage error (MPE)", true, true},
-		{SMAPE, "smape", "Symmetric mean absolute percentage error (sMAPE)", false, true},
-		{MASE, "mase", "Mean absolute scaled error (MASE)", false, false},
+		{ME, "me", "ME", "Mean error (ME)", true, false},
+		{MAE, "mae", "MAE", "Mean absolute error (MAE)", false, false},
+		{MSE, "mse", "MSE", "Mean squared error (MSE)", false, false},
+		{RMSE, "rmse", "RMSE", "Root mean squared error (RMSE)", false, false},
+		{MAPE, "mape", "MAPE", "Mean absolute percentage error (MAPE)", false, true},
+		{MPE, "mpe", "MPE", "Mean percentage error (MPE)", true, true},
+		{SMAPE, "smape", "sMAPE", "Symmetric mean absolute percentage error (sMAPE)", false, true},
+		{MASE, "mase", "MASE", "Mean absolute scaled error (MASE)", false, false},
 	}
 	if len(tests) != len(Measures()) {
 		t.Fatalf("%d measures tested, %d exist", len(tests), len(Measures()))
@@ -31,6 +32,9 @@ func TestMeasureNames(t *testing.T) {
 			t.Parallel()
 			if Measures()[i] != tc.m {
 				t.Errorf("Measures()[%d] = %v, want %v", i, Measures()[i], tc.m)
+			}
+			if tc.m.Label() != tc.label {
+				t.Errorf("Label() = %q, want %q", tc.m.Label(), tc.label)
 			}
 			if tc.m.String() != tc.name || tc.m.Title() != tc.title || tc.m.Signed() != tc.signed || tc.m.Percent() != tc.pct {
 				t.Errorf("%d: got %q %q signed %v percent %v", int(tc.m), tc.m.String(), tc.m.Title(), tc.m.Signed(), tc.m.Percent())
@@ -46,7 +50,7 @@ func TestMeasureNames(t *testing.T) {
 		})
 	}
 	bad := Measure(42)
-	if bad.Valid() || bad.String() != "measure(42)" || bad.Title() != "measure(42)" || bad.Definition() != "" || bad.Percent() {
+	if bad.Valid() || bad.String() != "measure(42)" || bad.Title() != "measure(42)" || bad.Label() != "measure(42)" || bad.Definition() != "" || bad.Percent() {
 		t.Errorf("invalid measure: %q %q %q", bad.String(), bad.Title(), bad.Definition())
 	}
 }
