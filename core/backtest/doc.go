@@ -25,7 +25,10 @@
 //     parameter (the moving-average width, a smoothing constant) on
 //     training and validation at once.
 //   - [Auto] is a forecast method named "auto" that ranks candidates by
-//     rolling-origin accuracy inside the training data and fits the winner.
+//     rolling-origin accuracy inside the training data ([Auto.Rank] gives
+//     the ranking and its evidence) and fits the equal-weight combination
+//     of the best few; [AutoSpec] is its catalogue entry for the step
+//     language.
 //
 // # References
 //
