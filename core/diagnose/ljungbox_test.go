@@ -175,3 +175,17 @@ func TestZ975(t *testing.T) {
 		t.Errorf("z975 = %.17g, gonum gives %.17g", z975, got)
 	}
 }
+
+func BenchmarkBoxPierce(b *testing.B) {
+	for _, size := range benchSizes {
+		y := seasonalSeries(size.n, 12, 1)
+		b.Run(size.name, func(b *testing.B) {
+			b.ReportAllocs()
+			for b.Loop() {
+				if _, err := BoxPierce(y, 24, 0); err != nil {
+					b.Fatal(err)
+				}
+			}
+		})
+	}
+}

@@ -105,3 +105,19 @@ func BenchmarkSeasonalStrength(b *testing.B) {
 		})
 	}
 }
+
+func BenchmarkTrendStrength(b *testing.B) {
+	for _, size := range benchSizes {
+		y := seasonalSeries(size.n, 12, 1)
+		d, err := Decompose(y, 12, Additive)
+		if err != nil {
+			b.Fatal(err)
+		}
+		b.Run(size.name, func(b *testing.B) {
+			b.ReportAllocs()
+			for b.Loop() {
+				TrendStrength(d)
+			}
+		})
+	}
+}
