@@ -47,9 +47,10 @@ func strengthEnough(n, season int) bool {
 }
 
 // Check tests a series for what forecasting methods commonly assume and
-// returns its findings in a fixed order: gaps, a constant series, zero or
-// negative values, trend, season. A finding is a [Warning] when the data
-// contradict assumes, an [Info] otherwise.
+// returns its findings in a fixed order: gaps, zero or negative values, a
+// constant series (after which nothing else is tested), trend, season. A
+// finding is a [Warning] when the data contradict assumes, an [Info]
+// otherwise.
 //
 // The trend test is [MannKendall] on the finite values; the season checks
 // (for season of 2 or more, on more than two full seasons without gaps) are
@@ -73,9 +74,13 @@ func Check(y []float64, season int, assumes Assumes) []Finding {
 		gaps++
 	}
 	if gaps > 0 {
+		unchecked := ""
+		if season >= 2 {
+			unchecked = ", and the season is not checked"
+		}
 		out = append(out, Finding{Severity: Warning, Topic: TopicGaps,
-			Text: fmt.Sprintf("The series has %s with no usable number (the first at period %d): the checks below leave %s out, and the season is not checked.",
-				counted(gaps, "period", "periods"), firstGap, plural(gaps, "it", "them")),
+			Text: fmt.Sprintf("The series has %s with no usable number (the first at period %d): the checks below leave %s out%s.",
+				counted(gaps, "period", "periods"), firstGap, plural(gaps, "it", "them"), unchecked),
 			Evidence: fmt.Sprintf("%d of %d periods are missing or infinite", gaps, len(y))})
 	}
 	if len(finite) == 0 {
@@ -83,13 +88,13 @@ func Check(y []float64, season int, assumes Assumes) []Finding {
 			Text:     "The series has no values to check.",
 			Evidence: fmt.Sprintf("n = %d", len(y))})
 	}
+	if f, ok := signFinding(finite, assumes); ok {
+		out = append(out, f)
+	}
 	if c, ok := constantValue(finite); ok {
 		return append(out, Finding{Severity: Info, Topic: TopicConstant,
 			Text:     fmt.Sprintf("The series is constant (every value is %s): it has no trend or season to follow, and MASE cannot be scaled on it.", num(c)),
 			Evidence: fmt.Sprintf("n = %d, all values equal", len(finite))})
-	}
-	if f, ok := signFinding(finite, assumes); ok {
-		out = append(out, f)
 	}
 	out = append(out, trendFinding(finite, assumes))
 	if season >= 2 && gaps == 0 {

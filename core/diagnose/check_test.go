@@ -77,6 +77,12 @@ func checkCases() []checkCase {
 		{"gaps", gaps, 12, movingAverage, []string{
 			"warning gaps: The series has 2 periods with no usable number (the first at period 7)", "trend:"}},
 		{"empty", nil, 12, movingAverage, []string{"info length: The series has no values to check."}},
+		{"all zero under a positive method", []float64{0, 0, 0, 0, 0}, 0, Assumes{Positive: true}, []string{
+			"warning sign: The series has 5 zero values: this method needs values above zero",
+			"info constant: The series is constant (every value is 0)"}},
+		{"gap without a season", []float64{1, 2, math.NaN(), 4, 5}, 0, Assumes{}, []string{
+			"warning gaps: The series has 1 period with no usable number (the first at period 3): the checks below leave it out.",
+			"info trend:"}},
 		{"two values", []float64{1, 2}, 0, movingAverage, []string{
 			"info trend: The trend could not be tested: a trend test needs at least 3 values; the series has 2."}},
 		{"three seasons of noise", noiseSeries(36, 100, 3), 12, movingAverage, []string{
