@@ -69,7 +69,7 @@ func (f *Fit) Interval(h int, level float64) (lo, hi []float64, err error) {
 	none := &Error{Cause: ErrNoInterval, Msg: fmt.Sprintf("%s has no analytic prediction interval; use empirical intervals from a backtest instead", f.Method)}
 	if f.bounds != nil {
 		lo, hi, ok := f.bounds(h, level)
-		if !ok {
+		if !ok || !allFinite(lo) || !allFinite(hi) {
 			return nil, nil, none
 		}
 		return lo, hi, nil
@@ -89,6 +89,9 @@ func (f *Fit) Interval(h int, level float64) (lo, hi []float64, err error) {
 		w := q * math.Sqrt(math.Max(v[i], 0))
 		lo[i] = point[i] - w
 		hi[i] = point[i] + w
+		if math.IsNaN(lo[i]) || math.IsInf(lo[i], 0) || math.IsNaN(hi[i]) || math.IsInf(hi[i], 0) {
+			return nil, nil, none
+		}
 	}
 	return lo, hi, nil
 }
@@ -101,4 +104,14 @@ func quantile(level, df float64) float64 {
 		return distuv.StudentsT{Mu: 0, Sigma: 1, Nu: df}.Quantile(p)
 	}
 	return distuv.UnitNormal.Quantile(p)
+}
+
+// allFinite reports whether every value of v is a finite number.
+func allFinite(v []float64) bool {
+	for _, x := range v {
+		if math.IsNaN(x) || math.IsInf(x, 0) {
+			return false
+		}
+	}
+	return true
 }

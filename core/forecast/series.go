@@ -5,13 +5,21 @@ import (
 	"math"
 )
 
+// maxMagnitude is the largest absolute value accepted in a series: squares
+// and sums of squares of larger values could overflow.
+const maxMagnitude = 1e100
+
 // checkSeries returns an error when y holds a value that is not a finite
-// number or has fewer than min values; need says why, in words
-// ("two values", "two full seasons of 12 periods").
+// number (or is larger in size than 1e100, whose squares could overflow)
+// or has fewer than min values; need says why, in words ("two values",
+// "two full seasons of 12 periods").
 func checkSeries(method string, y []float64, min int, need string) error {
 	for t, v := range y {
 		if math.IsNaN(v) || math.IsInf(v, 0) {
 			return &Error{Cause: ErrBadValue, Msg: fmt.Sprintf("%s: value %d of the training period is missing or not a finite number; fill or remove it first", method, t+1)}
+		}
+		if math.Abs(v) > maxMagnitude {
+			return &Error{Cause: ErrBadValue, Msg: fmt.Sprintf("%s: value %d of the training period, %g, is too large to compute with; rescale the series (for example, count in millions)", method, t+1, v)}
 		}
 	}
 	if len(y) < min {
