@@ -81,7 +81,7 @@ func Check(y []float64, season int, assumes Assumes) []Finding {
 		out = append(out, Finding{Severity: Warning, Topic: TopicGaps,
 			Text: fmt.Sprintf("The series has %s with no usable number (the first at period %d): the checks below leave %s out%s.",
 				counted(gaps, "period", "periods"), firstGap, plural(gaps, "it", "them"), unchecked),
-			Evidence: fmt.Sprintf("%d of %d periods are missing or infinite", gaps, len(y))})
+			Evidence: fmt.Sprintf("%d of %d periods %s missing or infinite", gaps, len(y), plural(gaps, "is", "are"))})
 	}
 	if len(finite) == 0 {
 		return append(out, Finding{Severity: Info, Topic: TopicLength,
