@@ -8,6 +8,7 @@ import { el } from "./dom.js";
 import { Notebook } from "./notebook.js";
 import { showHelp } from "./help.js";
 import { attachFiles, attachPaste, showPreview } from "./data.js";
+import { memoText, previewMemo, memoBlob } from "./memo.js";
 
 const $ = (id) => document.getElementById(id);
 const root = document.documentElement;
@@ -208,6 +209,26 @@ function wire() {
     if (f) await newSession(f.name.replace(/\.(md|txt)$/i, ""), await f.text());
   });
   $("export-session").addEventListener("click", () => download(fileName(session.title, ".md"), "text/markdown", session.text));
+  $("memo-preview").addEventListener("click", () => previewMemo($("memo-body"), $("memo-dialog")).catch((e) => setStatus(`No memo: ${explain(e)}`, true)));
+  for (const b of document.querySelectorAll("[data-memo]")) {
+    b.addEventListener("click", async () => {
+      try {
+        const { blob, ext } = await memoBlob(b.dataset.memo);
+        download(fileName(session.title, ext), blob.type, blob);
+        setStatus(`Memo written as ${ext}. Check it before it goes to the client.`);
+      } catch (e) {
+        setStatus(`No memo: ${explain(e)}`, true);
+      }
+    });
+  }
+  $("memo-copy").addEventListener("click", async () => {
+    try {
+      await navigator.clipboard.writeText(await memoText("md"));
+      setStatus("The memo is on the clipboard as markdown.");
+    } catch (e) {
+      setStatus(`Could not copy the memo: ${explain(e)}`, true);
+    }
+  });
   $("share").addEventListener("click", async () => {
     const link = shareLink();
     const box = $("share-link");

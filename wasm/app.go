@@ -60,6 +60,7 @@ func (a *app) functions() map[string]js.Func {
 		"duplicateSession": asyncFunc("duplicateSession", a.duplicateSession),
 		"deleteSession":    asyncFunc("deleteSession", a.deleteSession),
 		"forgetAll":        asyncFunc("forgetAll", a.forgetAll),
+		"memo":             asyncFunc("memo", a.memoOf),
 	}
 }
 

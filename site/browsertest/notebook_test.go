@@ -111,3 +111,31 @@ func TestNotebook(t *testing.T) {
 	p.screenshot("shared-link")
 	p.checkClean(ready)
 }
+
+// TestMemo writes the memo of the demo session: the preview shows the
+// holdout accuracy table, and the markdown and zip downloads carry it too.
+func TestMemo(t *testing.T) {
+	p := openSite(t)
+	ready := p.open("")
+	p.run("opening the memo preview", 30*time.Second, chromedp.Click(chromedp.CSS("#memo-preview")))
+	waitFor(p, "the memo preview", `document.getElementById('memo-dialog').open && document.querySelectorAll('#memo-body table').length > 0`)
+	p.screenshot("memo-preview")
+	preview := eval[string](p, `document.getElementById('memo-body').textContent`)
+	for _, want := range []string{"MASE", "holdout", "estimates"} {
+		if !strings.Contains(strings.ToLower(preview), strings.ToLower(want)) {
+			t.Errorf("the memo preview does not mention %q", want)
+		}
+	}
+	if n := eval[int](p, `document.querySelectorAll('#memo-body svg.qc').length`); n == 0 {
+		t.Error("the memo preview shows no chart")
+	}
+	md := eval[string](p, `globalThis.quillcast.memo("md").then(t => JSON.parse(t).value.text)`)
+	if !strings.Contains(md, "| ") || !strings.Contains(md, "MASE") {
+		t.Errorf("the markdown memo lacks the accuracy table:\n%.600s", md)
+	}
+	zipHead := eval[string](p, `globalThis.quillcast.memo("zip").then(t => atob(JSON.parse(t).value.bytes).slice(0, 2))`)
+	if zipHead != "PK" {
+		t.Errorf("the zip memo starts with %q, want a zip archive (PK)", zipHead)
+	}
+	p.checkClean(ready)
+}
