@@ -33,6 +33,24 @@ func BenchmarkFit(b *testing.B) {
 	}
 }
 
+// BenchmarkDifferenced fits ses to lag-1 and lag-12 differences.
+func BenchmarkDifferenced(b *testing.B) {
+	for _, lag := range []int{1, 12} {
+		m := Differenced{Lag: lag, Inner: Smoothing{}}
+		for _, n := range []int{48, 144, 1000} {
+			y := benchSeries(n)
+			b.Run(fmt.Sprintf("lag=%d/n=%d", lag, n), func(b *testing.B) {
+				b.ReportAllocs()
+				for b.Loop() {
+					if _, err := m.Fit(y, 12); err != nil {
+						b.Fatal(err)
+					}
+				}
+			})
+		}
+	}
+}
+
 // BenchmarkHoltWinters144 fits additive and multiplicative Holt-Winters,
 // all three constants estimated, to 144 monthly points and reports the
 // SSE evaluations per fit.

@@ -130,3 +130,24 @@ func FuzzParseNumbers(f *testing.F) {
 		}
 	})
 }
+
+// TestDeterministic: fitting twice gives identical parameters and
+// forecasts (bit for bit, so == is meant here).
+func TestDeterministic(t *testing.T) {
+	y := benchSeries(72)
+	for _, sp := range Catalog() {
+		m, _ := sp.New(nil)
+		a, b := mustFit(t, m, y, 12), mustFit(t, m, y, 12)
+		fa, fb := a.Forecast(12), b.Forecast(12)
+		for i := range fa {
+			if math.Float64bits(fa[i]) != math.Float64bits(fb[i]) {
+				t.Errorf("%s: forecast %d differs between runs: %v and %v", sp.Name, i+1, fa[i], fb[i])
+			}
+		}
+		for i := range a.Params {
+			if math.Float64bits(a.Params[i].Value) != math.Float64bits(b.Params[i].Value) {
+				t.Errorf("%s: %s differs between runs", sp.Name, a.Params[i].Name)
+			}
+		}
+	}
+}

@@ -114,6 +114,10 @@ func (s Smoothing) Fit(y []float64, season int) (*Fit, error) {
 		f.Components["trend"] = tr.trend
 	}
 	f.Params, f.States = s.report(form, sol.p, init, pr.free)
+	f.Stats = []Param{
+		{Name: "sse", Value: tr.sse, Estimated: true},
+		{Name: "sigma2", Value: f.sigma2, Estimated: true},
+	}
 	phi := sol.p[iPhi]
 	f.path = func(h int) []float64 { return form.path(n, tr.last, phi, h) }
 	f.variance = etsVariance(form, sol.p, f.sigma2)
