@@ -49,7 +49,9 @@ func (sc *scope) add(s *Step) {
 	case "load":
 		*sc = scope{data: s.N, labels: map[string]int{}}
 	case "split":
+		// Forecasts fitted before a split belong to the old partition.
 		sc.split = s.N
+		sc.labels, sc.order = map[string]int{}, nil
 	case "forecast", "combine":
 		l := Label(s)
 		if _, dup := sc.labels[l]; !dup {

@@ -2,6 +2,7 @@ package runner
 
 import (
 	"fmt"
+	"strings"
 
 	"quillcast/core/backtest"
 	"quillcast/core/chart"
@@ -28,7 +29,17 @@ func (x *exec) split() error {
 		return err
 	}
 	x.st.split = &partition{step: x.s.N, trainEnd: sp.TrainEnd}
-	x.st.eval, x.st.pick = nil, nil
+	if len(x.st.forecasts) > 0 {
+		x.message(Info, "The %s made before this split %s set aside: %s fitted on other periods. Forecast again after the split to compare on this holdout.",
+			count(len(x.st.forecasts), "forecast", "forecasts"), plural(len(x.st.forecasts), "is", "are"), plural(len(x.st.forecasts), "it was", "they were"))
+	}
+	x.st.forecasts, x.st.eval, x.st.pick = nil, nil, nil
+	x.st.backtests = map[string]*backtest.Backtest{}
+	for k := range x.st.broken {
+		if strings.HasPrefix(k, "label:") {
+			delete(x.st.broken, k)
+		}
+	}
 	delete(x.st.broken, "split")
 	n := len(d.y)
 	x.message(Info, "Training: %s (%s). Validation (holdout): %s (%s). Methods are fitted on the training period only and scored on the validation period they have not seen.",

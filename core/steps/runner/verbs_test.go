@@ -47,6 +47,7 @@ var verbTests = []struct {
 	{"load picks a series of a long file", `load shops.csv series=South`, Done, 1, 1, []string{"series in the file | 3"}},
 	{"split holds out the last year", base, Done, 0, 1, []string{"Training: 2020-01 to 2024-12 (60 periods)", "Validation (holdout): 2025-01 to 2025-12 (12 periods)"}},
 	{"split from a period", "load orders.csv\nsplit from=2025-01", Done, 0, 1, []string{"Validation (holdout): 2025-01 to 2025-12"}},
+	{"split sets earlier forecasts aside", "load orders.csv\nforecast naive horizon=3\nsplit last=12", Done, 0, 1, []string{"The 1 forecast made before this split is set aside"}},
 	{"split too long", "load orders.csv\nsplit last=100", Failed, 0, 0, []string{"cannot hold out the last 100 periods"}},
 	{"split from outside the series", "load orders.csv\nsplit from=2030-01", Failed, 0, 0, []string{"is not a period of the series"}},
 	{"smooth centred over a season", "load orders.csv\nsmooth centered width=12", Done, 0, 1, []string{"season averages out"}},
