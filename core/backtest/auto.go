@@ -4,6 +4,7 @@ import (
 	"context"
 	"fmt"
 	"slices"
+	"strings"
 
 	"quillcast/core/accuracy"
 	"quillcast/core/forecast"
@@ -96,6 +97,9 @@ func (a Auto) FitContext(ctx context.Context, y []float64, season int) (*forecas
 	fit.Method = a.Name()
 	notes := []string{"auto chose " + w.Label + "; " + r.Why()}
 	notes = append(notes, r.Notes...)
+	if len(r.Dropped) > 0 {
+		notes = append(notes, "Left out of the ranking because they could not be fitted on every origin: "+strings.Join(r.Dropped, "; ")+".")
+	}
 	fit.Notes = append(notes, fit.Notes...)
 	return fit, nil
 }

@@ -141,3 +141,18 @@ func TestAutoErrors(t *testing.T) {
 		})
 	}
 }
+
+func TestAutoDroppedNote(t *testing.T) {
+	t.Parallel()
+	fit, err := Auto{Candidates: []string{"ses", "seasonal-naive", "drift"}}.Fit(trendSeries(40), 0)
+	if err != nil {
+		t.Fatal(err)
+	}
+	notes := strings.Join(fit.Notes, "\n")
+	if !strings.Contains(notes, "Left out of the ranking") || !strings.Contains(notes, "seasonal-naive:") {
+		t.Errorf("notes do not say seasonal-naive was left out:\n%s", notes)
+	}
+	if !strings.Contains(fit.Notes[0], "auto chose comb-") {
+		t.Errorf("first note %q, want the combination of the two methods left", fit.Notes[0])
+	}
+}
