@@ -4,9 +4,13 @@ import (
 	"fmt"
 )
 
-// maxSpan is the most periods one series may span: twenty million, far
-// beyond any business series, so that a wrong date cannot exhaust memory.
-const maxSpan = 20_000_000
+// maxSpan returns the most periods one series of a file with rows data
+// rows may span: 100,000 plus 100 per row, at most twenty million. Far
+// beyond any business series, it keeps a mistyped date from filling
+// memory with missing periods.
+func maxSpan(rows int) int {
+	return min(20_000_000, 100_000+100*rows)
+}
 
 // assemble reads the periods and values and builds the series.
 func (r *reader) assemble(ro roles, st []colStats) {
@@ -128,6 +132,6 @@ func (r *reader) groupRows(key int) ([]string, [][]int32) {
 
 // spanError reports periods spread too far for one series.
 func (r *reader) spanError(name string, lo, hi Period) {
-	r.fail(-1, -1, "", ErrSpan, fmt.Sprintf("series %q runs from %s to %s, more than %d periods; check the dates, or set the frequency",
-		name, lo, hi, maxSpan))
+	r.fail(-1, -1, "", ErrSpan, fmt.Sprintf("series %q runs from %s to %s, %d %s for %d rows of data; check the first and last dates, or set a coarser frequency",
+		name, lo, hi, hi.Sub(lo)+1, lo.Freq.Plural(), len(r.rows)))
 }

@@ -60,7 +60,7 @@ func (b *builder) build(labelCols []int) (*Series, []Label) {
 		r.decide("series %q has no values and is left out", b.name)
 		return nil, nil
 	}
-	if hi-lo >= maxSpan {
+	if hi-lo >= maxSpan(len(r.rows)) {
 		r.spanError(b.name, Period{b.freq, lo}, Period{b.freq, hi})
 		return nil, nil
 	}
@@ -158,8 +158,7 @@ func (b *builder) duplicates() {
 			}
 		}
 		b.s.Values[slot] = v
-		r.ds.Changes = append(r.ds.Changes, Change{Series: b.name, Period: p, Lines: lines, Old: old, New: v,
-			Text: fmt.Sprintf("%s in series %q: lines %s (%s) combined by %s into %s", p, b.name, lineList(lines), valueList(old), agg, formatValue(v))})
+		r.ds.Changes = append(r.ds.Changes, Change{Kind: Combined, Series: b.name, Period: p, Lines: lines, Old: old, New: v, Agg: agg})
 	}
 }
 
@@ -170,8 +169,9 @@ func (b *builder) order(late [][2]int) {
 		k, before := pair[0], pair[1]
 		p, q := Period{b.freq, b.ord(k)}, Period{b.freq, b.ord(before)}
 		if r.opt.Sort {
-			r.ds.Changes = append(r.ds.Changes, Change{Series: b.name, Period: p, Lines: []int{b.line(k)}, Old: []float64{b.vals[b.idx[k]]}, New: b.vals[b.idx[k]],
-				Text: fmt.Sprintf("line %d (%s) placed at its period in series %q, before line %d (%s)", b.line(k), p, b.name, b.line(before), q)})
+			v := b.vals[b.idx[k]]
+			r.ds.Changes = append(r.ds.Changes, Change{Kind: Placed, Series: b.name, Period: p, Lines: []int{b.line(k)}, Old: []float64{v}, New: v,
+				From: q, Before: b.line(before)})
 			continue
 		}
 		b.problem(Problem{Err: ErrOutOfOrder, Line: b.line(k), Period: p, Count: 1, Blocking: true,

@@ -59,14 +59,52 @@ func (p Problem) String() string {
 }
 
 // Change is one change made to the data on request: a row placed at its
-// period, duplicates combined, or a missing value filled.
+// period, duplicates combined, or a missing value filled. [Change.String]
+// states it in one plain sentence.
 type Change struct {
-	Series string    // name of the series changed
-	Period Period    // the period whose value changed or was placed
-	Lines  []int     // lines of the file involved; none for a filled gap without a row
-	Old    []float64 // the values found (one per line), empty for a filled gap
-	New    float64   // the value now in the series
-	Text   string    // the change as one plain sentence
+	Kind   ChangeKind // what was done
+	Series string     // name of the series changed
+	Period Period     // the period whose value changed or was placed
+	Lines  []int      // lines of the file involved; none for a filled value
+	Old    []float64  // the values found on those lines
+	New    float64    // the value now in the series
+	From   Period     // Placed: the period of the row it now comes before; Filled: where the value came from (the left end for Linear)
+	To     Period     // Filled by Linear: the right end of the line
+	Fill   FillMethod // Filled: the method
+	Agg    Aggregate  // Combined: the aggregate
+	Before int        // Placed: the line of the row it now comes before
+}
+
+// ChangeKind says what a [Change] did.
+type ChangeKind uint8
+
+// Kinds of change.
+const (
+	Placed   ChangeKind = iota + 1 // a row out of order placed at its period
+	Combined                       // several rows for one period combined
+	Filled                         // a missing value filled
+)
+
+// String states the change in one plain sentence.
+func (c Change) String() string {
+	switch c.Kind {
+	case Placed:
+		return fmt.Sprintf("line %d (%s) placed at its period in series %q, before line %d (%s)", c.Lines[0], c.Period, c.Series, c.Before, c.From)
+	case Combined:
+		return fmt.Sprintf("%s in series %q: lines %s (%s) combined by %s into %s", c.Period, c.Series, lineList(c.Lines), valueList(c.Old), c.Agg, formatValue(c.New))
+	case Filled:
+		how := ""
+		switch c.Fill {
+		case CarryForward:
+			how = "carrying forward " + c.From.String()
+		case Linear:
+			how = fmt.Sprintf("a straight line from %s to %s", c.From, c.To)
+		case Seasonal:
+			how = "taking the value one season away, " + c.From.String()
+		}
+		return fmt.Sprintf("%s in series %q: missing, filled with %s by %s", c.Period, c.Series, formatValue(c.New), how)
+	}
+	return fmt.Sprintf("%s in series %q: %s", c.Period, c.Series, formatValue(c.New))
 }
 
 // Lookup returns the series with the given name (compared without regard

@@ -21,21 +21,21 @@ import (
 func Fill(s *Series, method FillMethod) ([]Change, error) {
 	v := s.Values
 	var changes []Change
-	add := func(i int, x float64, how string) {
+	add := func(i int, x float64, from, to int) {
 		v[i] = x
-		changes = append(changes, Change{Series: s.Name, Period: s.PeriodAt(i), New: x,
-			Text: fmt.Sprintf("%s in series %q: missing, filled with %s by %s", s.PeriodAt(i), s.Name, formatValue(x), how)})
+		changes = append(changes, Change{Kind: Filled, Series: s.Name, Period: s.PeriodAt(i), New: x,
+			From: s.PeriodAt(from), To: s.PeriodAt(to), Fill: method})
 	}
 	switch method {
 	case NoFill:
 	case CarryForward:
-		last := math.NaN()
+		last := -1
 		for i, x := range v {
 			switch {
 			case !math.IsNaN(x):
-				last = x
-			case !math.IsNaN(last):
-				add(i, last, "carrying forward "+s.PeriodAt(i-1).String())
+				last = i
+			case last >= 0:
+				add(i, v[last], last, last)
 			}
 		}
 	case Linear:
@@ -48,7 +48,7 @@ func Fill(s *Series, method FillMethod) ([]Change, error) {
 				a, b := v[prev], v[i]
 				for j := prev + 1; j < i; j++ {
 					t := float64(j-prev) / float64(i-prev)
-					add(j, a+t*(b-a), fmt.Sprintf("a straight line from %s to %s", s.PeriodAt(prev), s.PeriodAt(i)))
+					add(j, a+t*(b-a), prev, i)
 				}
 			}
 			prev = i
@@ -68,9 +68,9 @@ func Fill(s *Series, method FillMethod) ([]Change, error) {
 			}
 			switch {
 			case i-m >= 0 && !math.IsNaN(v[i-m]):
-				add(i, v[i-m], "taking the value one season earlier, "+s.PeriodAt(i-m).String())
+				add(i, v[i-m], i-m, i-m)
 			case i+m < len(v) && orig[i+m]:
-				add(i, v[i+m], "taking the value one season later, "+s.PeriodAt(i+m).String())
+				add(i, v[i+m], i+m, i+m)
 			}
 		}
 	default:

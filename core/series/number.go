@@ -92,7 +92,7 @@ func scanNumber(b []byte) (nb number) {
 		nb.neg = true
 		b = trimCell(b[1 : len(b)-1])
 	}
-	for {
+	for len(b) > 0 && !plainEdge(b[0]) || len(b) > 0 && !plainEdge(b[len(b)-1]) {
 		var ok bool
 		if b, ok = stripMoney(b); ok {
 			nb.money = true
@@ -120,7 +120,7 @@ func scanNumber(b []byte) (nb number) {
 		b = trimCell(b[:len(b)-1])
 	}
 	// Exponent.
-	if e := bytes.IndexAny(b, "eE"); e > 0 && e < len(b)-1 {
+	if e := indexExp(b); e > 0 && e < len(b)-1 {
 		exp := b[e+1:]
 		if exp[0] == '-' || exp[0] == '+' {
 			exp = exp[1:]
@@ -206,6 +206,55 @@ func stripMoney(b []byte) ([]byte, bool) {
 		return trimCell(b[:len(b)-4]), true
 	}
 	return b, false
+}
+
+// plainEdge reports whether c may start or end a plain number, so that
+// no sign, currency or percent needs stripping there.
+func plainEdge(c byte) bool { return c >= '0' && c <= '9' || c == '.' || c == ',' }
+
+// indexExp returns the index of the first 'e' or 'E' in b, or -1.
+func indexExp(b []byte) int {
+	for i, c := range b {
+		if c|0x20 == 'e' {
+			return i
+		}
+	}
+	return -1
+}
+
+// quickNumber reads a cell written as plain digits with at most one point
+// and an optional leading minus, the shape of most machine exports. It
+// returns false for anything else, which scanNumber then takes apart.
+func quickNumber(b []byte) (ev evidence, ok bool) {
+	i := 0
+	if len(b) > 0 && b[0] == '-' {
+		i = 1
+	}
+	digits, dot, after := 0, -1, 0
+	for ; i < len(b); i++ {
+		c := b[i]
+		switch {
+		case c >= '0' && c <= '9':
+			digits++
+			if dot >= 0 {
+				after++
+			}
+		case c == '.' && dot < 0:
+			dot = i
+		default:
+			return evNone, false
+		}
+	}
+	if digits == 0 || digits > 17 || dot == len(b)-1 {
+		return evNone, false
+	}
+	switch {
+	case dot < 0:
+		return evNone, true
+	case after != 3 || b[0] == '.' || b[0] == '-' && dot == 1 || b[0] == '0' && dot == 1 || b[0] == '-' && b[1] == '0' && dot == 2:
+		return evDot, true
+	}
+	return evAmbiguous, true
 }
 
 func isUpper3(b []byte) bool {

@@ -17,7 +17,7 @@ func TestPeriodString(t *testing.T) {
 		{"leap day", NewDay(2024, 2, 29), "2024-02-29"},
 		{"day normalised", NewDay(2023, 2, 29), "2023-03-01"},
 		{"week", NewWeek(2024, 5), "2024-W05"},
-		{"week 53 of 2020", NewWeek(2020, 53), "2020-W53"},          // 2020-01-01 was a Wednesday in a leap year (ISO 8601 rule, common practice)
+		{"week 53 of 2020", NewWeek(2020, 53), "2020-W53"},                 // 2020-01-01 was a Wednesday in a leap year (ISO 8601 rule, common practice)
 		{"week 1 of 2021 starts 2021-01-04", NewWeek(2021, 1), "2021-W01"}, // hand calculation: 4 January 2021 was a Monday
 		{"week 53 of 2021 is week 1 of 2022", NewWeek(2021, 53), "2022-W01"},
 		{"month", NewMonth(2024, 3), "2024-03"},

@@ -3,6 +3,7 @@ package series
 import (
 	"fmt"
 	"math"
+	"strconv"
 )
 
 // This file reads value columns: it decides each column's decimal mark
@@ -19,6 +20,13 @@ func (r *reader) valueColumn(c int) []float64 {
 	money, percent := 0, 0
 	for i, row := range r.rows {
 		b := trimCell(r.t.cell(int(row), c))
+		if ev, ok := quickNumber(b); ok {
+			count[ev]++
+			if first[ev] < 0 {
+				first[ev] = i
+			}
+			continue
+		}
 		if isMissing(b, r.opt.Missing) {
 			continue
 		}
@@ -83,6 +91,13 @@ func (r *reader) valueColumn(c int) []float64 {
 	values := make([]float64, len(r.rows))
 	for i, row := range r.rows {
 		b := trimCell(r.t.cell(int(row), c))
+		if ev, ok := quickNumber(b); ok && (dec == '.' || ev == evNone) {
+			v, err := strconv.ParseFloat(string(b), 64)
+			if err == nil {
+				values[i] = v
+				continue
+			}
+		}
 		if isMissing(b, r.opt.Missing) {
 			values[i] = math.NaN()
 			continue
