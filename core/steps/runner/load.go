@@ -146,7 +146,7 @@ func (x *exec) load() error {
 	}
 	for _, c := range ds.Changes {
 		if c.Series == s.Name {
-			x.message(Info, "Changed: %s.", c.Text)
+			x.message(Info, "Changed: %s.", c.String())
 		}
 	}
 	svg := chart.Line{

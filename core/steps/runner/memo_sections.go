@@ -60,7 +60,7 @@ func (res *Result) dataSection() memo.Section {
 	ds := st.data.set
 	for _, c := range ds.Changes {
 		if c.Series == st.data.series.Name {
-			log = append(log, c.Text)
+			log = append(log, c.String())
 		}
 	}
 	for _, p := range ds.Problems {
