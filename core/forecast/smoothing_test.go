@@ -216,3 +216,23 @@ func TestPublishedMSETable(t *testing.T) {
 		t.Errorf("heuristic %s = %.12g, want published b1 %g", f.States[1].Name, got, c.Expected.B1)
 	}
 }
+
+// TestSESPublishedForecast: NIST/SEMATECH e-Handbook 6.4.3.2 states that
+// with alpha 0.1 the forecast of the 12th value (70) is 71.7; that is the
+// one-step fitted value of the last observation (case
+// ses_fixed_nist_example, published_check, abs 0.05).
+func TestSESPublishedForecast(t *testing.T) {
+	var c struct {
+		refCase
+		Published struct {
+			Value float64 `json:"published_value"`
+			Abs   float64 `json:"abs_tolerance"`
+		} `json:"published_check"`
+	}
+	readCase(t, "ses_fixed_nist_example", &c)
+	f := mustFit(t, Smoothing{Alpha: ptr(0.1)}, c.Data.Y, 0)
+	n := len(c.Data.Y)
+	if c.Published.Abs == 0 || !within(f.Fitted[n-1], c.Published.Value, c.Published.Abs, 0) {
+		t.Errorf("forecast of the last value %.4f, published %g", f.Fitted[n-1], c.Published.Value)
+	}
+}
