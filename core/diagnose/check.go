@@ -52,7 +52,8 @@ func strengthEnough(n, season int) bool {
 // finding is a [Warning] when the data contradict assumes, an [Info]
 // otherwise.
 //
-// The trend test is [MannKendall] on the finite values; the season checks
+// The trend test is [MannKendall] on the finite values, or
+// [SeasonalKendall] when a season is found; the season checks
 // (for season of 2 or more, on more than two full seasons without gaps) are
 // [SeasonalityTest] at lag season and [SeasonalStrength] of the additive
 // [Decompose]; either the test, or a strength of at least [StrongSeason] on
@@ -96,9 +97,18 @@ func Check(y []float64, season int, assumes Assumes) []Finding {
 			Text:     fmt.Sprintf("The series is constant (every value is %s): it has no trend or season to follow, and MASE cannot be scaled on it.", num(c)),
 			Evidence: fmt.Sprintf("n = %d, all values equal", len(finite))})
 	}
-	out = append(out, trendFinding(finite, assumes))
+	var seasonal Finding
+	step := 1
 	if season >= 2 && gaps == 0 {
-		out = append(out, seasonFinding(y, season, assumes))
+		var found bool
+		seasonal, found = seasonFinding(y, season, assumes)
+		if found {
+			step = season
+		}
+	}
+	out = append(out, trendFinding(finite, step, assumes))
+	if seasonal.Text != "" {
+		out = append(out, seasonal)
 	}
 	return out
 }
@@ -149,8 +159,15 @@ func signFinding(y []float64, assumes Assumes) (Finding, bool) {
 	return f, true
 }
 
-func trendFinding(y []float64, assumes Assumes) Finding {
+// trendFinding tests y for a trend: by the seasonal Kendall test within
+// each of step season positions when step > 1, by Mann-Kendall otherwise.
+func trendFinding(y []float64, step int, assumes Assumes) Finding {
+	test := "Mann-Kendall"
 	mk, err := MannKendall(y)
+	if step > 1 {
+		test = "seasonal Kendall test"
+		mk, err = SeasonalKendall(y, step)
+	}
 	if err != nil {
 		return Finding{Severity: Info, Topic: TopicTrend,
 			Text:     fmt.Sprintf("The trend could not be tested: %s.", strings.TrimSuffix(err.Error(), ".")),
@@ -158,12 +175,16 @@ func trendFinding(y []float64, assumes Assumes) Finding {
 	}
 	evidence := fmt.Sprintf("Mann-Kendall S = %.0f, Z = %s, %s, n = %d; Sen's slope %s a period",
 		mk.S, num(mk.Z), formatP(mk.P), mk.N, num(mk.Slope))
+	if step > 1 {
+		evidence = fmt.Sprintf("seasonal Kendall test within each of the %d season positions (the season makes the plain test unreliable): S = %.0f, Z = %s, %s, n = %d; seasonal Sen's slope %s a period",
+			step, mk.S, num(mk.Z), formatP(mk.P), mk.N, num(mk.Slope))
+	}
 	if mk.N < 10 {
 		evidence += " (fewer than 10 values: the p-value is rough)"
 	}
 	if !(mk.P < Significance) || mk.Slope == 0 {
 		return Finding{Severity: Info, Topic: TopicTrend,
-			Text:     fmt.Sprintf("The series shows no clear trend (Mann-Kendall %s).", formatP(mk.P)),
+			Text:     fmt.Sprintf("The series shows no clear trend (%s %s).", test, formatP(mk.P)),
 			Evidence: evidence}
 	}
 	verb, miss := "rises", "under-forecast"
@@ -174,7 +195,7 @@ func trendFinding(y []float64, assumes Assumes) Finding {
 	if level := meanOf(y); allPositive(y) && level > 0 {
 		size = rough(100*math.Abs(mk.Slope)/level) + "%"
 	}
-	text := fmt.Sprintf("The series %s by about %s a period (Mann-Kendall %s)", verb, size, formatP(mk.P))
+	text := fmt.Sprintf("The series %s by about %s a period (%s %s)", verb, size, test, formatP(mk.P))
 	if assumes.NoTrend {
 		return Finding{Severity: Warning, Topic: TopicTrend, Evidence: evidence,
 			Text: fmt.Sprintf("%s: %s assumes no trend, lags behind it and will %s.", text, assumes.name(), miss)}
@@ -182,12 +203,13 @@ func trendFinding(y []float64, assumes Assumes) Finding {
 	return Finding{Severity: Info, Topic: TopicTrend, Text: text + ".", Evidence: evidence}
 }
 
-func seasonFinding(y []float64, season int, assumes Assumes) Finding {
+// seasonFinding checks y for a season and reports whether it found one.
+func seasonFinding(y []float64, season int, assumes Assumes) (Finding, bool) {
 	if len(y) <= 2*season {
 		return Finding{Severity: Info, Topic: TopicSeason,
 			Text: fmt.Sprintf("The series is too short to check a season of %d periods: that needs more than two full seasons (%d values); it has %d.",
 				season, 2*season+1, len(y)),
-			Evidence: fmt.Sprintf("n = %d, season %d", len(y), season)}
+			Evidence: fmt.Sprintf("n = %d, season %d", len(y), season)}, false
 	}
 	tested, stat := SeasonalityTest(y, season)
 	var strength float64
@@ -204,15 +226,15 @@ func seasonFinding(y []float64, season int, assumes Assumes) Finding {
 		season, season, num(stat), strength, rule, len(y))
 	if !seasonal {
 		return Finding{Severity: Info, Topic: TopicSeason, Evidence: evidence,
-			Text: fmt.Sprintf("The series shows no clear pattern repeating every %d periods.", season)}
+			Text: fmt.Sprintf("The series shows no clear pattern repeating every %d periods.", season)}, false
 	}
 	text := fmt.Sprintf("A pattern repeating every %d periods accounts for %s of the variation around the trend (seasonal strength %.2f)",
 		season, percent(strength), strength)
 	if assumes.NoSeason {
 		return Finding{Severity: Warning, Topic: TopicSeason, Evidence: evidence,
-			Text: fmt.Sprintf("%s: %s cannot follow a season and will miss its peaks and troughs.", text, assumes.name())}
+			Text: fmt.Sprintf("%s: %s cannot follow a season and will miss its peaks and troughs.", text, assumes.name())}, true
 	}
-	return Finding{Severity: Info, Topic: TopicSeason, Text: text + ".", Evidence: evidence}
+	return Finding{Severity: Info, Topic: TopicSeason, Text: text + ".", Evidence: evidence}, true
 }
 
 func meanOf(y []float64) float64 {

@@ -12,7 +12,8 @@
 //     for display; [Difference] takes lag differences.
 //   - [ACF] with its white-noise band [ACFBound], [LjungBox] and
 //     [BoxPierce] look at autocorrelation.
-//   - [MannKendall] tests for a monotonic trend and estimates its slope;
+//   - [MannKendall] tests for a monotonic trend and estimates its slope,
+//     [SeasonalKendall] does so within the positions of a season;
 //     [SeasonalStrength] and [TrendStrength] measure how much of the
 //     variation a season or a trend accounts for.
 //   - [Check] and [CheckResiduals] return [Finding] values to show under a

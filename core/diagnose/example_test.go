@@ -41,7 +41,7 @@ func ExampleCheck() {
 		fmt.Printf("%s: %s\n", f.Severity, f.Text)
 	}
 	// Output:
-	// warning: The series rises by about 0.47% a period (Mann-Kendall p < 0.001): a moving average assumes no trend, lags behind it and will under-forecast.
+	// warning: The series rises by about 0.47% a period (seasonal Kendall test p < 0.001): a moving average assumes no trend, lags behind it and will under-forecast.
 	// warning: A pattern repeating every 12 periods accounts for 86% of the variation around the trend (seasonal strength 0.86): a moving average cannot follow a season and will miss its peaks and troughs.
 }
 

@@ -51,48 +51,105 @@ type TrendTest struct {
 // modified Mann-Kendall trend test for autocorrelated data", Journal of
 // Hydrology 204, 182-196.
 func MannKendall(y []float64) (TrendTest, error) {
-	n := len(y)
-	if n < 3 {
-		return TrendTest{}, inputErr(ErrTooShort, 0, "a trend test needs at least 3 values; the series has %d", n)
+	if len(y) < 3 {
+		return TrendTest{}, inputErr(ErrTooShort, 0, "a trend test needs at least 3 values; the series has %d", len(y))
 	}
+	return kendall(y, 1)
+}
+
+// SeasonalKendall tests y for a monotonic trend by the seasonal Kendall
+// test: the Mann-Kendall statistic is computed within each position of the
+// season (all Januaries, all Februaries, ...) and summed, S = sum_g S_g with
+// VarS = sum_g VarS_g, so that a stable season neither hides nor fakes a
+// trend. Z and P follow as in [MannKendall]. Slope is the seasonal Sen's
+// slope, the median of (y_j - y_i)/(j - i) over pairs of the same season
+// position, in units per period.
+//
+// Where no two values of the same season position differ, S and VarS are
+// 0 and the result is Z = 0, P = 1: no evidence of a trend. A season below
+// 2 gives [MannKendall].
+//
+// It returns an [*InputError] when y holds fewer than two full seasons (or
+// 3 values), holds a NaN or infinite value, or is constant.
+//
+// Reference: R. M. Hirsch, J. R. Slack and R. A. Smith (1982), "Techniques
+// of trend analysis for monthly water quality data", Water Resources
+// Research 18(1), 107-121.
+func SeasonalKendall(y []float64, season int) (TrendTest, error) {
+	if season < 2 {
+		return MannKendall(y)
+	}
+	if len(y) < 2*season {
+		return TrendTest{}, inputErr(ErrTooShort, 0,
+			"a seasonal trend test needs at least two full seasons (%d values for a season of %d); the series has %d",
+			2*season, season, len(y))
+	}
+	return kendall(y, season)
+}
+
+// kendall runs the Mann-Kendall test within each of the step interleaved
+// subseries y[g], y[g+step], ... and sums the results; step 1 is the
+// ordinary test. It requires len(y) >= 2*step and len(y) >= 3.
+func kendall(y []float64, step int) (TrendTest, error) {
+	n := len(y)
 	if err := checkFinite(y); err != nil {
 		return TrendTest{}, err
 	}
-	sorted := slices.Clone(y)
-	slices.Sort(sorted)
-	if sorted[0] == sorted[n-1] {
+	lo, hi := slices.Min(y), slices.Max(y)
+	if lo == hi {
 		return TrendTest{}, inputErr(ErrConstant, 0, "the series is constant, so it has no trend to test")
 	}
+	var s int64
+	var varS float64
+	sub := make([]float64, 0, n/step+1)
+	for g := range step {
+		sub = sub[:0]
+		for i := g; i < n; i += step {
+			sub = append(sub, y[i])
+		}
+		sorted := slices.Clone(sub)
+		slices.Sort(sorted)
+		s += kendallS(sub, sorted)
+		varS += kendallVariance(sorted)
+	}
+	var z float64
+	switch {
+	case varS <= 0:
+		// No two values of one subseries differ: S is 0 with no spread.
+	case s > 0:
+		z = (float64(s) - 1) / math.Sqrt(varS)
+	case s < 0:
+		z = (float64(s) + 1) / math.Sqrt(varS)
+	}
+	p := 2 * distuv.UnitNormal.Survival(math.Abs(z))
+	// Sen's slope is found on y scaled into [-1, 1], so that no sum in the
+	// search can overflow, and scaled back.
+	c := max(math.Abs(lo), math.Abs(hi))
+	scaled := make([]float64, n)
+	for i, v := range y {
+		scaled[i] = v / c
+	}
+	slope := c * senSlope(scaled, step, hi/c-lo/c)
+	return TrendTest{N: n, S: float64(s), VarS: varS, Z: z, P: min(p, 1), Slope: slope}, nil
+}
+
+// kendallVariance returns the variance of Kendall's S for values in
+// ascending order, corrected for ties:
+// (n(n-1)(2n+5) - sum over tie groups of t(t-1)(2t+5)) / 18.
+func kendallVariance(sorted []float64) float64 {
+	n := len(sorted)
 	nf := float64(n)
-	varS := nf * (nf - 1) * (2*nf + 5)
+	v := nf * (nf - 1) * (2*nf + 5)
 	for i := 0; i < n; {
 		j := i + 1
 		for j < n && sorted[j] == sorted[i] {
 			j++
 		}
 		tf := float64(j - i)
-		varS -= tf * (tf - 1) * (2*tf + 5)
+		v -= tf * (tf - 1) * (2*tf + 5)
 		i = j
 	}
-	varS /= 18
-	s := float64(kendallS(y, sorted))
-	var z float64
-	switch {
-	case s > 0:
-		z = (s - 1) / math.Sqrt(varS)
-	case s < 0:
-		z = (s + 1) / math.Sqrt(varS)
-	}
-	p := 2 * distuv.UnitNormal.Survival(math.Abs(z))
-	// Sen's slope is found on y scaled into [-1, 1], so that no sum in the
-	// search can overflow, and scaled back.
-	c := max(math.Abs(sorted[0]), math.Abs(sorted[n-1]))
-	scaled := make([]float64, n)
-	for i, v := range y {
-		scaled[i] = v / c
-	}
-	slope := c * senSlope(scaled, sorted[n-1]/c-sorted[0]/c)
-	return TrendTest{N: n, S: s, VarS: varS, Z: z, P: min(p, 1), Slope: slope}, nil
+	return v / 18
 }
 
 // kendallS returns sum over i < j of sign(y_j - y_i), counting with a
@@ -116,83 +173,4 @@ func kendallS(y, sorted []float64) int64 {
 		}
 	}
 	return s
-}
-
-// senSlope returns the median of the pairwise slopes of y. spread is
-// max(y) - min(y), a bound on the size of every slope.
-func senSlope(y []float64, spread float64) float64 {
-	n := len(y)
-	pairs := int64(n) * int64(n-1) / 2
-	z := make([]float64, n)
-	buf := make([]float64, n)
-	// below(t) counts pairs i < j with slope (y_j-y_i)/(j-i) <= t, that is
-	// with y_j - t·j <= y_i - t·i.
-	below := func(t float64) int64 {
-		for i, v := range y {
-			z[i] = v - t*float64(i)
-		}
-		return countNotAbove(z, buf)
-	}
-	// Bisection stops when the bracket is narrower than tiny; the k-th
-	// slope lies in (lo, hi], so hi is within tiny of it.
-	tiny := 1e-12 * spread
-	kth := func(k int64, lo float64) float64 {
-		hi := spread * 1.5 // below(lo) < k <= pairs = below(hi)
-		for i := 0; i < 200 && hi-lo > tiny; i++ {
-			mid := lo + (hi-lo)/2
-			if below(mid) >= k {
-				hi = mid
-			} else {
-				lo = mid
-			}
-		}
-		return hi
-	}
-	var slope float64
-	if pairs%2 == 1 {
-		slope = kth((pairs+1)/2, -spread*1.5)
-	} else {
-		low := kth(pairs/2, -spread*1.5)
-		high := low
-		if below(low) < pairs/2+1 {
-			// The next slope lies above low: search only above it.
-			high = kth(pairs/2+1, low)
-		}
-		slope = (low + high) / 2
-	}
-	if math.Abs(slope) <= tiny {
-		return 0 // a flat median slope, up to the bisection's resolution
-	}
-	return slope
-}
-
-// countNotAbove sorts z and returns the number of pairs i < j (positions
-// before sorting) with z[j] <= z[i]. buf is scratch space as long as z.
-func countNotAbove(z, buf []float64) int64 {
-	n := len(z)
-	if n < 2 {
-		return 0
-	}
-	var count int64
-	for width := 1; width < n; width *= 2 {
-		for lo := 0; lo < n-width; lo += 2 * width {
-			mid, hi := lo+width, min(lo+2*width, n)
-			i, j, k := lo, mid, lo
-			for i < mid && j < hi {
-				if z[j] <= z[i] {
-					count += int64(mid - i)
-					buf[k] = z[j]
-					j++
-				} else {
-					buf[k] = z[i]
-					i++
-				}
-				k++
-			}
-			k += copy(buf[k:], z[i:mid])
-			copy(buf[k:], z[j:hi])
-			copy(z[lo:hi], buf[lo:hi])
-		}
-	}
-	return count
 }

@@ -164,3 +164,128 @@ func BenchmarkMannKendall(b *testing.B) {
 		})
 	}
 }
+
+func TestSeasonalKendallHand(t *testing.T) {
+	t.Parallel()
+	tests := []struct {
+		name    string
+		y       []float64
+		season  int
+		s, varS float64
+		z       float64
+		slope   float64
+	}{
+		// Hand calculation: season 2 splits 1,10,2,12,3,11 into 1,2,3
+		// (S = 3) and 10,12,11 (S = 2-1 = 1); each VarS = 3·2·11/18, so
+		// S = 4, VarS = 132/18, Z = 3/sqrt(132/18). Same-season slopes
+		// 0.5, 0.5, 0.5 and 1, 0.25, -0.5 have median 0.5.
+		{"two seasons", []float64{1, 10, 2, 12, 3, 11}, 2, 4, 132.0 / 18, 3 / math.Sqrt(132.0/18), 0.5},
+		// Hand calculation: a season repeated exactly has no same-season
+		// pair that differs: S = VarS = 0, Z = 0, slope 0.
+		{"pure season", []float64{1, 5, 1, 5, 1, 5}, 2, 0, 0, 0, 0},
+		// Season 1 is the ordinary test: the first hand case of MannKendall.
+		{"no season", []float64{1, 3, 2, 5, 4}, 1, 6, 300.0 / 18, 5 / math.Sqrt(300.0/18), 0.875},
+	}
+	for _, tc := range tests {
+		t.Run(tc.name, func(t *testing.T) {
+			t.Parallel()
+			got, err := SeasonalKendall(tc.y, tc.season)
+			if err != nil {
+				t.Fatal(err)
+			}
+			wantP := 2 * distuv.UnitNormal.Survival(math.Abs(tc.z))
+			c := tol{Abs: 1e-9, Rel: 1e-9}
+			if !c.near(got.S, tc.s) || !c.near(got.VarS, tc.varS) || !c.near(got.Z, tc.z) ||
+				!c.near(got.P, wantP) || !c.near(got.Slope, tc.slope) {
+				t.Errorf("SeasonalKendall(%v, %d) = %+v; want S %v, VarS %v, Z %v, P %v, slope %v",
+					tc.y, tc.season, got, tc.s, tc.varS, tc.z, wantP, tc.slope)
+			}
+		})
+	}
+}
+
+// TestSeasonalKendallAgainstPairs compares with the direct definition over
+// same-season pairs on random series from a fixed seed.
+func TestSeasonalKendallAgainstPairs(t *testing.T) {
+	t.Parallel()
+	rng := rand.New(rand.NewPCG(8, 9))
+	for trial := range 20 {
+		m := 2 + rng.IntN(11)
+		n := 2*m + rng.IntN(60)
+		y := make([]float64, n)
+		for i := range y {
+			y[i] = 0.2*float64(i) + 10*math.Sin(float64(i%m)) + 5*rng.NormFloat64()
+			if trial%4 == 0 {
+				y[i] = math.Round(y[i] / 5)
+			}
+		}
+		t.Run(fmt.Sprintf("trial%d/m%d/n%d", trial, m, n), func(t *testing.T) {
+			got, err := SeasonalKendall(y, m)
+			if err != nil {
+				t.Fatal(err)
+			}
+			var s float64
+			var slopes []float64
+			for i := range y {
+				for j := i + m; j < n; j += m {
+					switch {
+					case y[j] > y[i]:
+						s++
+					case y[j] < y[i]:
+						s--
+					}
+					slopes = append(slopes, (y[j]-y[i])/float64(j-i))
+				}
+			}
+			slices.Sort(slopes)
+			k := len(slopes)
+			slope := slopes[k/2]
+			if k%2 == 0 {
+				slope = (slopes[k/2-1] + slopes[k/2]) / 2
+			}
+			spread := slices.Max(y) - slices.Min(y)
+			if got.S != s || math.Abs(got.Slope-slope) > 1e-9*spread {
+				t.Errorf("S, slope = %v, %.12g; pairs give %v, %.12g", got.S, got.Slope, s, slope)
+			}
+		})
+	}
+}
+
+func TestSeasonalKendallErrors(t *testing.T) {
+	t.Parallel()
+	tests := []struct {
+		name   string
+		y      []float64
+		season int
+		cause  error
+	}{
+		{"short", []float64{1, 2, 3, 4, 5}, 3, ErrTooShort},
+		{"empty", nil, 4, ErrTooShort},
+		{"no season and short", []float64{1, 2}, 0, ErrTooShort},
+		{"constant", []float64{3, 3, 3, 3}, 2, ErrConstant},
+		{"nan", []float64{1, 2, math.NaN(), 4}, 2, ErrNotFinite},
+		{"inf", []float64{1, 2, 3, math.Inf(-1)}, 2, ErrNotFinite},
+	}
+	for _, tc := range tests {
+		t.Run(tc.name, func(t *testing.T) {
+			t.Parallel()
+			if _, err := SeasonalKendall(tc.y, tc.season); !errors.Is(err, tc.cause) {
+				t.Errorf("SeasonalKendall(%v, %d): error %v, want %v", tc.y, tc.season, err, tc.cause)
+			}
+		})
+	}
+}
+
+func BenchmarkSeasonalKendall(b *testing.B) {
+	for _, size := range benchSizes {
+		y := seasonalSeries(size.n, 12, 1)
+		b.Run(size.name, func(b *testing.B) {
+			b.ReportAllocs()
+			for b.Loop() {
+				if _, err := SeasonalKendall(y, 12); err != nil {
+					b.Fatal(err)
+				}
+			}
+		})
+	}
+}
