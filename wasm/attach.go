@@ -104,7 +104,7 @@ func previewOf(ds *series.Dataset) preview {
 		p.Problems = append(p.Problems, problem{Series: pr.Series, Line: pr.Line, Column: pr.Column, Text: pr.String(), Blocking: pr.Blocking})
 	}
 	for _, c := range ds.Changes {
-		p.Changes = append(p.Changes, c.Text)
+		p.Changes = append(p.Changes, c.String())
 	}
 	for _, s := range ds.Series {
 		p.Series = append(p.Series, seriesPreviewOf(s, ds.DateColumn))
