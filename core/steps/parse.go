@@ -78,7 +78,11 @@ func parseLine(line string, cat Catalog) *Step {
 	}
 	def, ok := Lookup(verb.raw)
 	if !ok {
-		s.Err = errAt(verb.col, ErrVerb, "unknown verb "+quote(verb.raw)+didYouMean(strings.ToLower(verb.raw), verbNames())+verbList())
+		hint := didYouMean(strings.ToLower(verb.raw), verbNames())
+		if hint == "" {
+			hint = verbList()
+		}
+		s.Err = errAt(verb.col, ErrVerb, "unknown verb "+quote(verb.raw)+hint)
 		return s
 	}
 	rest := toks[1:]
