@@ -46,6 +46,18 @@ func ParseWith(doc *session.Document, cat Catalog) *Program {
 	return p
 }
 
+// Files returns the data files the session's load steps name, in order of
+// first use, without repeats: what must be attached before it runs.
+func (p *Program) Files() []string {
+	var out []string
+	for _, s := range p.Steps {
+		if s.Verb == "load" && s.Subject != "" && !contains(out, s.Subject) {
+			out = append(out, s.Subject)
+		}
+	}
+	return out
+}
+
 // isBlank reports whether a line holds no step: only spaces or a comment.
 func isBlank(line string) bool {
 	t := strings.TrimLeft(line, " \t\r")

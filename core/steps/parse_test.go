@@ -246,3 +246,12 @@ func BenchmarkParse(b *testing.B) {
 		})
 	}
 }
+
+func TestFiles(t *testing.T) {
+	t.Parallel()
+	p := ParseText(docOf("load a.csv\nsplit last=3\nload b.csv value=x\nload a.csv"))
+	got := p.Files()
+	if len(got) != 2 || got[0] != "a.csv" || got[1] != "b.csv" {
+		t.Errorf("got %v, want [a.csv b.csv]", got)
+	}
+}

@@ -12,6 +12,8 @@ func (x *exec) memo() error {
 			m.Client = o.Value.Raw
 		case "by":
 			m.By = o.Value.Raw
+			set = append(set, "author")
+			continue
 		case "date":
 			m.Date = o.Value.Raw
 		}

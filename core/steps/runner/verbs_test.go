@@ -4,6 +4,8 @@ import (
 	"fmt"
 	"strings"
 	"testing"
+
+	"quillcast/core/series"
 )
 
 // testData are small invented files: a monthly series with trend and
@@ -132,5 +134,21 @@ func TestRunErrorPositions(t *testing.T) {
 	}
 	if !strings.HasPrefix(e.Error(), "line 7, column 3: ") {
 		t.Errorf("message %q does not start with the position", e.Error())
+	}
+}
+
+// TestDatasetAttached runs on a dataset read beforehand, as the page does
+// after its preview.
+func TestDatasetAttached(t *testing.T) {
+	t.Parallel()
+	ds, err := series.Read(synthetic(36, 100, 1, 5), "pre.csv", series.ReadOptions{})
+	if err != nil {
+		t.Fatal(err)
+	}
+	res := run("load pre.csv\nsplit last=6\nforecast naive", Data{Sets: map[string]*series.Dataset{"pre.csv": ds}})
+	for _, o := range res.Outputs {
+		if o.Status != Done {
+			t.Errorf("step %d: %s %v", o.Step, o.Status, o.Error)
+		}
 	}
 }
