@@ -24,7 +24,7 @@ OUT       ?= $(BUILD)/memo
 WASM_ENV  := GOOS=js GOARCH=wasm
 WASM_OPTS := -trimpath -ldflags='-s -w'
 
-.PHONY: all serve build test vet test-host test-wasm sizes bakeoff memo fuzz bench clean
+.PHONY: all serve build test vet test-host test-wasm dist bundle sizes bakeoff memo fuzz bench clean
 
 all: build
 
@@ -45,20 +45,28 @@ build:
 	(cd $(SITE)/demo && ls *.csv 2>/dev/null || true) > $(SITE)/demo/files.txt
 
 ## test: every test of the project
-test: vet build test-host test-wasm
+test: vet test-host test-wasm
 
 vet:
 	$(GO) vet ./...
 	$(WASM_ENV) $(GO) vet ./wasm/...
 
 # The host tests include the browser tests in site/browsertest, which open
-# build/site in Chromium; `build` runs first.
-test-host: build
+# build/site, build/dist and build/quillcast.html in Chromium.
+test-host: build dist bundle
 	$(GO) test ./...
 
 test-wasm:
 	@command -v node >/dev/null || { echo "node is needed for the wasm tests (apt-get install nodejs)"; exit 1; }
 	$(WASM_ENV) $(GO) test -exec="$(WASM_LIB)/go_js_wasm_exec" ./wasm/...
+
+## dist: the folder to upload to any static host, in build/dist
+dist: build
+	$(GO) run ./site/pack -site $(SITE) -dist $(BUILD)/dist
+
+## bundle: one self-contained HTML file that works opened from disk
+bundle: build
+	$(GO) run ./site/pack -site $(SITE) -bundle $(BUILD)/quillcast.html
 
 ## sizes: raw and gzip size of the built engine
 sizes: build

@@ -9,6 +9,7 @@ import { Notebook } from "./notebook.js";
 import { showHelp } from "./help.js";
 import { attachFiles, attachPaste, showPreview } from "./data.js";
 import { memoText, previewMemo, memoBlob } from "./memo.js";
+import { assetBytes, assetText, engineResponse } from "./assets.js";
 
 const $ = (id) => document.getElementById(id);
 const root = document.documentElement;
@@ -129,22 +130,12 @@ async function newSession(title, text) {
   await save();
 }
 
-/** fetchBytes fetches one of our own files as bytes. */
-async function fetchBytes(path) {
-  const res = await fetch(path);
-  if (!res.ok) throw new Error(`could not load ${path} (${res.status})`);
-  return new Uint8Array(await res.arrayBuffer());
-}
-
-/** loadDemo fetches the demo session and its files, before the engine is ready. */
+/** loadDemo reads the demo session and its files, before the engine is ready. */
 async function loadDemo() {
-  const [list, text] = await Promise.all([
-    fetch("demo/files.txt").then((r) => (r.ok ? r.text() : "")),
-    fetch("demo/demo.md").then((r) => (r.ok ? r.text() : "")),
-  ]);
+  const [list, text] = await Promise.all([assetText("demo/files.txt"), assetText("demo/demo.md")]);
   const names = list.split("\n").map((s) => s.trim()).filter(Boolean);
-  const files = await Promise.all(names.map(async (name) => ({ name, bytes: await fetchBytes("demo/" + name) })));
-  return { text, files };
+  const files = await Promise.all(names.map(async (name) => ({ name, bytes: await assetBytes("demo/" + name) })));
+  return { text, files: files.filter((f) => f.bytes) };
 }
 
 /** sharedSteps returns the steps carried by a share link, or null. */
@@ -290,7 +281,7 @@ function toggleHelp() {
 async function main() {
   wire();
   try {
-    const [, demo] = await Promise.all([start(fetch("quillcast.wasm")), loadDemo()]);
+    const [, demo] = await Promise.all([start(engineResponse()), loadDemo()]);
     const store = await call("storage");
     $("storage-note").textContent = store.kind === "IndexedDB"
       ? "Sessions and datasets are kept in this browser's storage on this computer."

@@ -51,14 +51,13 @@ func moduleRoot(t *testing.T) string {
 	}
 }
 
-// builtSite returns the folder written by `make build`.
-func builtSite(t *testing.T) string {
+// builtSite returns a folder written by `make build` ("site") or `make
+// dist` ("dist").
+func builtSite(t *testing.T, name string) string {
 	t.Helper()
-	dir := filepath.Join(moduleRoot(t), "build", "site")
-	for _, f := range []string{"index.html", "app.js", "wasm_exec.js", "quillcast.wasm"} {
-		if _, err := os.Stat(filepath.Join(dir, f)); err != nil {
-			unavailable(t, "the built site lacks %s; run `make build` first", f)
-		}
+	dir := filepath.Join(moduleRoot(t), "build", name)
+	if _, err := os.Stat(filepath.Join(dir, "index.html")); err != nil {
+		unavailable(t, "build/%s lacks index.html; run `make build dist bundle` first", name)
 	}
 	return dir
 }
@@ -74,27 +73,38 @@ type request struct {
 type page struct {
 	t    *testing.T
 	ctx  context.Context
-	base *url.URL // the served site, http://127.0.0.1:port/
-	dir  string   // the served folder
+	base *url.URL // the site: http://127.0.0.1:port/ or the bundle's file:// URL
 
 	mu       sync.Mutex
 	requests []request
 	console  []string // console errors, exceptions and browser-log errors
 }
 
-// openSite serves the built site and starts a browser on it, with a fresh
-// profile, no network beyond 127.0.0.1 and a 1366×768 window.
+// openSite serves build/site and starts a browser on it; see [openFolder].
 func openSite(t *testing.T) *page {
 	t.Helper()
-	if _, err := os.Stat(chromiumPath); err != nil {
-		unavailable(t, "Chromium is not installed at %s (apt-get install chromium)", chromiumPath)
-	}
-	dir := builtSite(t)
-	srv := httptest.NewServer(static.Handler(dir))
+	return openFolder(t, "site")
+}
+
+// openFolder serves build/NAME on 127.0.0.1 with a random port and starts
+// a browser on it, with a fresh profile and a 1366×768 window.
+func openFolder(t *testing.T, name string) *page {
+	t.Helper()
+	srv := httptest.NewServer(static.Handler(builtSite(t, name)))
 	t.Cleanup(srv.Close)
 	base, err := url.Parse(srv.URL + "/")
 	if err != nil {
 		t.Fatal(err)
+	}
+	return startBrowser(t, base)
+}
+
+// startBrowser starts a fresh headless Chromium that will open pages under
+// base, and records its requests and console.
+func startBrowser(t *testing.T, base *url.URL) *page {
+	t.Helper()
+	if _, err := os.Stat(chromiumPath); err != nil {
+		unavailable(t, "Chromium is not installed at %s (apt-get install chromium)", chromiumPath)
 	}
 	opts := []chromedp.ExecAllocatorOption{
 		chromedp.ExecPath(chromiumPath),
@@ -120,7 +130,7 @@ func openSite(t *testing.T) *page {
 		cancelCtx()
 		cancelAlloc()
 	})
-	p := &page{t: t, ctx: ctx, base: base, dir: dir}
+	p := &page{t: t, ctx: ctx, base: base}
 	if err := chromedp.Do(ctx); err != nil {
 		t.Fatalf("starting Chromium: %v", err)
 	}
@@ -279,7 +289,8 @@ func (p *page) checkClean(since time.Time) {
 	}
 }
 
-// local reports whether u is the served site itself, or a data:/blob: URL.
+// local reports whether u is the served site itself (or, for the
+// single-file build, that one file), or a data:/blob: URL.
 func (p *page) local(raw string) bool {
 	u, err := url.Parse(raw)
 	if err != nil {
@@ -289,7 +300,9 @@ func (p *page) local(raw string) bool {
 	case "data", "blob":
 		return true
 	case "http":
-		return u.Host == p.base.Host && strings.HasPrefix(u.Hostname(), "127.0.0.1")
+		return p.base.Scheme == "http" && u.Host == p.base.Host && strings.HasPrefix(u.Hostname(), "127.0.0.1")
+	case "file":
+		return p.base.Scheme == "file" && u.Path == p.base.Path
 	}
 	return false
 }

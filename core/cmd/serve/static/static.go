@@ -45,6 +45,13 @@ func Policy() string {
 		"frame-ancestors 'none'"
 }
 
+// MetaPolicy returns [Policy] in the form a <meta http-equiv> element can
+// carry: browsers ignore frame-ancestors there (and say so in the console),
+// so it is left out. Static hosts that send no header rely on it.
+func MetaPolicy() string {
+	return strings.TrimSuffix(Policy(), "; frame-ancestors 'none'")
+}
+
 // StyleHashes returns the CSP hash sources ("sha256-…") of the inline style
 // sheets the engine writes into its SVG charts, so that charts shown inline
 // keep their look under a policy that refuses other inline styles.
@@ -80,9 +87,11 @@ var contentTypes = map[string]string{
 	".gz":   "application/gzip",
 }
 
-// hashedName matches a file name with a content hash of at least eight hex
-// digits before its extension, such as "quillcast.0a1b2c3d4e.wasm".
-var hashedName = regexp.MustCompile(`\.[0-9a-f]{8,}\.[a-z0-9]+$`)
+// hashedName matches a path whose file name carries a content hash of at
+// least eight hex digits before its extension ("quillcast.0a1b2c3d4e.wasm"),
+// or that lies in a content-hashed folder ("assets-0a1b2c3d4e5f/app.js",
+// as `make dist` writes).
+var hashedName = regexp.MustCompile(`\.[0-9a-f]{8,}\.[a-z0-9]+$|(^|/)assets-[0-9a-f]{8,}/`)
 
 // ContentType returns the Content-Type for a file name, or
 // "application/octet-stream" for an extension not in the table.
@@ -93,8 +102,9 @@ func ContentType(name string) string {
 	return "application/octet-stream"
 }
 
-// CacheControl returns the Cache-Control value for a file name: a year and
-// immutable for content-hashed names, revalidate on every load otherwise.
+// CacheControl returns the Cache-Control value for a file's path: a year and
+// immutable for content-hashed names and folders, revalidate on every load
+// otherwise.
 func CacheControl(name string) string {
 	if hashedName.MatchString(name) {
 		return "public, max-age=31536000, immutable"
@@ -128,7 +138,7 @@ func Handler(dir string) http.Handler {
 			file = path.Join(name, "index.html")
 		}
 		h.Set("Content-Type", ContentType(file))
-		h.Set("Cache-Control", CacheControl(path.Base(file)))
+		h.Set("Cache-Control", CacheControl(file))
 		files.ServeHTTP(w, r)
 	})
 }

@@ -13,16 +13,17 @@ func writeSite(t *testing.T) string {
 	t.Helper()
 	dir := t.TempDir()
 	files := map[string]string{
-		"index.html":                "<!doctype html><title>q</title>",
-		"app.js":                    "export {}",
-		"quillcast.wasm":            "\x00asm",
-		"quillcast.0a1b2c3d4e.wasm": "\x00asm",
-		"demo/orders.csv":           "month,units\n2024-01,5\n",
-		"demo/demo.md":              "# demo\n",
-		"chart.svg":                 "<svg/>",
-		"lib/worker.mjs":            "export {}",
-		".secret":                   "no",
-		"empty/readme.txt":          "no index here",
+		"index.html":                 "<!doctype html><title>q</title>",
+		"app.js":                     "export {}",
+		"quillcast.wasm":             "\x00asm",
+		"quillcast.0a1b2c3d4e.wasm":  "\x00asm",
+		"demo/orders.csv":            "month,units\n2024-01,5\n",
+		"demo/demo.md":               "# demo\n",
+		"chart.svg":                  "<svg/>",
+		"assets-0a1b2c3d4e5f/app.js": "export {}",
+		"lib/worker.mjs":             "export {}",
+		".secret":                    "no",
+		"empty/readme.txt":           "no index here",
 	}
 	for name, body := range files {
 		p := filepath.Join(dir, filepath.FromSlash(name))
@@ -51,6 +52,7 @@ func TestHandler(t *testing.T) {
 		{"module", "GET", "/lib/worker.mjs", 200, "text/javascript; charset=utf-8", "no-cache"},
 		{"engine", "GET", "/quillcast.wasm", 200, "application/wasm", "no-cache"},
 		{"hashed engine", "GET", "/quillcast.0a1b2c3d4e.wasm", 200, "application/wasm", "public, max-age=31536000, immutable"},
+		{"hashed folder", "GET", "/assets-0a1b2c3d4e5f/app.js", 200, "text/javascript; charset=utf-8", "public, max-age=31536000, immutable"},
 		{"csv", "GET", "/demo/orders.csv", 200, "text/csv; charset=utf-8", "no-cache"},
 		{"markdown", "GET", "/demo/demo.md", 200, "text/markdown; charset=utf-8", "no-cache"},
 		{"svg", "GET", "/chart.svg", 200, "image/svg+xml", "no-cache"},
@@ -106,6 +108,17 @@ func TestPolicyKeepsThePageLocal(t *testing.T) {
 		if strings.Contains(policy, bad) {
 			t.Errorf("Policy() = %q allows %q", policy, bad)
 		}
+	}
+}
+
+func TestMetaPolicy(t *testing.T) {
+	t.Parallel()
+	meta := MetaPolicy()
+	if strings.Contains(meta, "frame-ancestors") {
+		t.Errorf("MetaPolicy() = %q carries frame-ancestors, which a meta element cannot", meta)
+	}
+	if !strings.HasPrefix(Policy(), meta) || !strings.Contains(meta, "connect-src 'self'") {
+		t.Errorf("MetaPolicy() = %q is not Policy() without its last directive", meta)
 	}
 }
 
