@@ -20,6 +20,7 @@ func collect(data []Series, methods []namedMethod, outcomes []seriesOutcome, lag
 		nSMAPE, nMASE     int
 		series, points    int
 		skipped           int
+		smapeOut, maseOut int
 		smapeWhy, maseWhy string
 	}
 	tot := make([]sums, len(methods))
@@ -44,20 +45,33 @@ func collect(data []Series, methods []namedMethod, outcomes []seriesOutcome, lag
 			if res := sc.Of(accuracy.SMAPE); res.Defined {
 				t.smape += res.Value * float64(sc.N)
 				t.nSMAPE += sc.N
-			} else if t.smapeWhy == "" {
-				t.smapeWhy = fmt.Sprintf("series %s: %s", s.Name, res.Reason)
+			} else {
+				t.smapeOut++
+				if t.smapeWhy == "" {
+					t.smapeWhy = fmt.Sprintf("series %s: %s", s.Name, res.Reason)
+				}
 			}
 			if res := sc.Of(accuracy.MASE); res.Defined {
 				t.mase += res.Value * float64(sc.N)
 				t.nMASE += sc.N
-			} else if t.maseWhy == "" {
-				t.maseWhy = fmt.Sprintf("series %s: %s", s.Name, res.Reason)
+			} else {
+				t.maseOut++
+				if t.maseWhy == "" {
+					t.maseWhy = fmt.Sprintf("series %s: %s", s.Name, res.Reason)
+				}
 			}
 		}
 	}
 	for j, nm := range methods {
 		t := tot[j]
-		sc := Score{Method: nm.label, Series: t.series, Points: t.points, Skipped: t.skipped}
+		sc := Score{Method: nm.label, Series: t.series, Points: t.points, Skipped: t.skipped,
+			SMAPEOut: t.smapeOut, MASEOut: t.maseOut}
+		if t.smapeOut > 0 {
+			sc.SMAPEWhy = t.smapeWhy
+		}
+		if t.maseOut > 0 {
+			sc.MASEWhy = t.maseWhy
+		}
 		sc.SMAPE = mean(t.smape, t.nSMAPE, t.smapeWhy, "sMAPE")
 		sc.MASE = mean(t.mase, t.nMASE, t.maseWhy, "MASE")
 		r.Scores = append(r.Scores, sc)
@@ -113,6 +127,20 @@ func (r *Result) WriteTable(w io.Writer) error {
 			return err
 		}
 	}
+	for _, s := range r.Scores {
+		for _, out := range []struct {
+			name string
+			n    int
+			why  string
+		}{{"sMAPE", s.SMAPEOut, s.SMAPEWhy}, {"MASE", s.MASEOut, s.MASEWhy}} {
+			if out.n == 0 || s.Series == out.n {
+				continue
+			}
+			if _, err := fmt.Fprintf(w, "%s: the mean %s leaves out %d %s where it is undefined, for example %s\n", s.Method, out.name, out.n, plural(out.n, "series", "series"), oneLine(out.why)); err != nil {
+				return err
+			}
+		}
+	}
 	return nil
 }
 
@@ -121,6 +149,13 @@ func cell(res accuracy.Result, digits int) string {
 		return "-"
 	}
 	return strconv.FormatFloat(res.Value, 'f', digits, 64)
+}
+
+func plural(n int, one, many string) string {
+	if n == 1 {
+		return one
+	}
+	return many
 }
 
 func oneLine(s string) string { return strings.Join(strings.Fields(s), " ") }

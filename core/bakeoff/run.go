@@ -62,6 +62,11 @@ type Score struct {
 	// reason when no period could be scored.
 	SMAPE, MASE accuracy.Result
 	Skipped     int // series the method could not forecast (see Result.Skips)
+	// SMAPEOut and MASEOut count the series forecast whose sMAPE or MASE
+	// is undefined (a constant fit part leaves MASE without a scale), left
+	// out of the means; SMAPEWhy and MASEWhy give the first reason.
+	SMAPEOut, MASEOut int
+	SMAPEWhy, MASEWhy string
 }
 
 // Result is the outcome of a bake-off.

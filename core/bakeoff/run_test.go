@@ -133,3 +133,25 @@ func TestRunErrors(t *testing.T) {
 		t.Errorf("cancelled: error %v, want one wrapping context.Canceled", err)
 	}
 }
+
+func TestRunConstantSeries(t *testing.T) {
+	t.Parallel()
+	data := append(handSeries(), Series{Name: "C", FitPeriods: []string{"1", "2", "3"}, Fit: []float64{4, 4, 4}, TestPeriods: []string{"4"}, Test: []float64{5}})
+	res, err := Run(context.Background(), data, Options{Methods: []string{"naive"}})
+	if err != nil {
+		t.Fatal(err)
+	}
+	s := res.Scores[0]
+	// Hand calculation: MASE over A and B only, as in TestRunHandMade; C's
+	// fit part is constant, so its MASE has no scale.
+	if s.MASEOut != 1 || !scalar.EqualWithinAbsOrRel(s.MASE.Value, (1+1+5/(4.0/3))/3, 1e-12, 1e-12) {
+		t.Errorf("MASE %v leaving out %d series, want %v leaving out 1", s.MASE.Value, s.MASEOut, (1+1+5/(4.0/3))/3)
+	}
+	var b bytes.Buffer
+	if err := res.WriteTable(&b); err != nil {
+		t.Fatal(err)
+	}
+	if !strings.Contains(b.String(), "the mean MASE leaves out 1 series where it is undefined, for example series C") {
+		t.Errorf("table does not explain the missing MASE:\n%s", b.String())
+	}
+}
