@@ -65,10 +65,10 @@ type Change struct {
 	Kind   ChangeKind // what was done
 	Series string     // name of the series changed
 	Period Period     // the period whose value changed or was placed
-	Lines  []int      // lines of the file involved; none for a filled value
+	Lines  []int      // lines of the file involved (Reversed: the first and last row); none for a filled value
 	Old    []float64  // the values found on those lines
 	New    float64    // the value now in the series
-	From   Period     // Placed: the period of the row it now comes before; Filled: where the value came from (the left end for Linear)
+	From   Period     // Placed: the period of the row it now comes before; Filled: where the value came from (the left end for Linear); Reversed: the newest period
 	To     Period     // Filled by Linear: the right end of the line
 	Fill   FillMethod // Filled: the method
 	Agg    Aggregate  // Combined: the aggregate
@@ -83,11 +83,14 @@ const (
 	Placed   ChangeKind = iota + 1 // a row out of order placed at its period
 	Combined                       // several rows for one period combined
 	Filled                         // a missing value filled
+	Reversed                       // rows running newest first read in reverse order
 )
 
 // String states the change in one plain sentence.
 func (c Change) String() string {
 	switch c.Kind {
+	case Reversed:
+		return fmt.Sprintf("series %q ran newest first, from %s on line %d down to %s on line %d; its rows are read in reverse order", c.Series, c.From, c.Lines[0], c.Period, c.Lines[1])
 	case Placed:
 		return fmt.Sprintf("line %d (%s) placed at its period in series %q, before line %d (%s)", c.Lines[0], c.Period, c.Series, c.Before, c.From)
 	case Combined:

@@ -2,7 +2,6 @@ package series
 
 import (
 	"bytes"
-	"strconv"
 	"unicode/utf8"
 )
 
@@ -26,62 +25,6 @@ type number struct {
 	percent bool
 	money   bool
 	bad     string // why the cell is not a number, as a hint; "" when ok
-}
-
-// isMissing reports whether a trimmed cell means "no value": empty, NA,
-// N/A, NaN, null, none, missing, #N/A, -, --, a dash, ".", "?", or one of
-// the extra markers given.
-func isMissing(b []byte, extra []string) bool {
-	switch {
-	case len(b) == 0:
-		return true
-	case b[0] >= '0' && b[0] <= '9':
-		return false
-	case len(b) == 1:
-		return b[0] == '-' || b[0] == '.' || b[0] == '?'
-	}
-	if len(b) <= 8 {
-		var low [8]byte
-		for i, c := range b {
-			if c >= 'A' && c <= 'Z' {
-				c += 'a' - 'A'
-			}
-			low[i] = c
-		}
-		switch string(low[:len(b)]) {
-		case "na", "n/a", "n.a.", "nan", "null", "none", "missing", "#n/a", "--", "\u2013", "\u2014":
-			return true
-		}
-	}
-	for _, m := range extra {
-		if len(m) == len(b) && bytes.EqualFold(b, []byte(m)) {
-			return true
-		}
-	}
-	return false
-}
-
-// trimCell trims ASCII spaces, tabs and no-break spaces from both ends.
-func trimCell(b []byte) []byte {
-	for len(b) > 0 {
-		if b[0] == ' ' || b[0] == '\t' {
-			b = b[1:]
-		} else if len(b) >= 2 && b[0] == 0xC2 && b[1] == 0xA0 {
-			b = b[2:]
-		} else {
-			break
-		}
-	}
-	for len(b) > 0 {
-		if c := b[len(b)-1]; c == ' ' || c == '\t' {
-			b = b[:len(b)-1]
-		} else if len(b) >= 2 && b[len(b)-2] == 0xC2 && b[len(b)-1] == 0xA0 {
-			b = b[:len(b)-2]
-		} else {
-			break
-		}
-	}
-	return b
 }
 
 // scanNumber takes a trimmed cell apart without deciding which mark is the
@@ -222,41 +165,6 @@ func indexExp(b []byte) int {
 	return -1
 }
 
-// quickNumber reads a cell written as plain digits with at most one point
-// and an optional leading minus, the shape of most machine exports. It
-// returns false for anything else, which scanNumber then takes apart.
-func quickNumber(b []byte) (ev evidence, ok bool) {
-	i := 0
-	if len(b) > 0 && b[0] == '-' {
-		i = 1
-	}
-	digits, dot, after := 0, -1, 0
-	for ; i < len(b); i++ {
-		c := b[i]
-		switch {
-		case c >= '0' && c <= '9':
-			digits++
-			if dot >= 0 {
-				after++
-			}
-		case c == '.' && dot < 0:
-			dot = i
-		default:
-			return evNone, false
-		}
-	}
-	if digits == 0 || digits > 17 || dot == len(b)-1 {
-		return evNone, false
-	}
-	switch {
-	case dot < 0:
-		return evNone, true
-	case after != 3 || b[0] == '.' || b[0] == '-' && dot == 1 || b[0] == '0' && dot == 1 || b[0] == '-' && b[1] == '0' && dot == 2:
-		return evDot, true
-	}
-	return evAmbiguous, true
-}
-
 func isUpper3(b []byte) bool {
 	return b[0] >= 'A' && b[0] <= 'Z' && b[1] >= 'A' && b[1] <= 'Z' && b[2] >= 'A' && b[2] <= 'Z'
 }
@@ -295,107 +203,4 @@ func letterHint(b []byte) string {
 		return "characters that are not UTF-8 text; save the file as UTF-8"
 	}
 	return ""
-}
-
-// evidence is what one cell says about the decimal mark of its column.
-type evidence uint8
-
-const (
-	evNone      evidence = iota // no mark, or nothing to learn
-	evDot                       // the decimal mark must be '.'
-	evComma                     // the decimal mark must be ','
-	evAmbiguous                 // one mark followed by exactly three digits: 1,234 or 1.234
-)
-
-// markEvidence returns what a scanned number says about the decimal mark.
-func (nb *number) markEvidence() evidence {
-	switch {
-	case nb.dots > 0 && nb.commas > 0:
-		if nb.lastSep == '.' {
-			return evDot
-		}
-		return evComma
-	case nb.dots > 1:
-		return evComma
-	case nb.commas > 1:
-		return evDot
-	case nb.dots == 1 || nb.commas == 1:
-		lead := nb.buf[0]
-		if nb.after != 3 || lead == '.' || lead == ',' || (lead == '0' && nb.buf[1] == nb.lastSep) {
-			if nb.lastSep == '.' {
-				return evDot
-			}
-			return evComma
-		}
-		if nb.grouped { // "1 234,567": spaces group, so the mark is decimal
-			if nb.lastSep == '.' {
-				return evDot
-			}
-			return evComma
-		}
-		return evAmbiguous
-	}
-	return evNone
-}
-
-// value returns the number with decimal mark dec ('.' or ','), or false
-// with a hint when its marks do not fit that reading: the other mark must
-// group digits in threes (twos before the last group are accepted, as in
-// 1,23,456.7), before any decimal mark.
-func (nb *number) value(dec byte) (float64, string) {
-	if !nb.ok {
-		if nb.bad == "" {
-			return 0, "text"
-		}
-		return 0, nb.bad
-	}
-	var out [64]byte
-	k := 0
-	group := byte('.')
-	if dec == '.' {
-		group = ','
-	}
-	seenDec := false
-	run, groups := 0, 0
-	for i := 0; i < nb.n; i++ {
-		c := nb.buf[i]
-		switch c {
-		case dec:
-			if seenDec {
-				return 0, "two decimal marks?"
-			}
-			if groups > 0 && run != 3 {
-				return 0, "digits grouped oddly"
-			}
-			seenDec = true
-			out[k] = '.'
-			k++
-			run = 0
-		case group:
-			if seenDec {
-				return 0, "a grouping mark after the decimal mark"
-			}
-			if run == 0 || run > 3 || (groups > 0 && run < 2) {
-				return 0, "digits grouped oddly"
-			}
-			groups++
-			run = 0
-		default:
-			out[k] = c
-			k++
-			run++
-		}
-	}
-	if groups > 0 && !seenDec && run != 3 {
-		return 0, "digits grouped oddly"
-	}
-	k += copy(out[k:], nb.exp)
-	v, err := strconv.ParseFloat(string(out[:k]), 64)
-	if err != nil {
-		return 0, "too large"
-	}
-	if nb.neg {
-		v = -v
-	}
-	return v, ""
 }

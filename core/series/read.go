@@ -4,6 +4,7 @@ import (
 	"cmp"
 	"fmt"
 	"slices"
+	"strings"
 )
 
 // reader holds the state of one call to [Read].
@@ -132,7 +133,7 @@ func (r *reader) dataRows(header bool) bool {
 			r.errs = append(r.errs, err.(*ParseError))
 			return false
 		}
-		want := r.opt.Only.Value
+		want := strings.TrimSpace(r.opt.Only.Value)
 		kept := r.rows[:0]
 		for _, row := range r.rows {
 			if string(trimCell(t.cell(int(row), c))) == want {

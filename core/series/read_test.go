@@ -154,6 +154,10 @@ var readTests = []struct {
 		want: "wide month\nunits 2024-01 [-5 -7]"},
 	{name: "Indian grouping", in: "month,units\n2024-01,\"1,23,456.5\"\n",
 		want: "wide month\nunits 2024-01 [123456.5]"},
+	{name: "comments do not make a long layout", in: "month,units,comment\n2024-01,5,ok\n2024-01,6,again\n2024-02,7,fine\n2024-03,8,good\n",
+		want: "wide month\nunits 2024-01 [missing 7 8]"},
+	{name: "four-digit numbers with three decimals", in: "month,price\n2024-01,1234.567\n2024-02,2345.678\n",
+		want: "wide month\nprice 2024-01 [1234.567 2345.678]"},
 	{name: "ISO week 53", in: "week,units\n2020-W52,1\n2020-W53,2\n2021-W01,3\n",
 		want: "wide week\nunits 2020-W52 [1 2 3]"},
 }

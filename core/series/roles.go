@@ -187,8 +187,9 @@ func (r *reader) chooseKey(ro roles, st []colStats, ords []int) int {
 			if c == ro.date || c == ro.year || c == ro.sub || candidate >= 0 {
 				continue
 			}
+			// An unnamed key repeats: at most half as many names as rows.
 			if hint && hinted(name, keyNames) && (st[c].textual() || st[c].ints == st[c].present()) ||
-				!hint && st[c].textual() && len(st[c].keys) > 1 {
+				!hint && st[c].textual() && len(st[c].keys) > 1 && 2*len(st[c].keys) <= st[c].cells {
 				candidate, named = c, hint
 			}
 		}
