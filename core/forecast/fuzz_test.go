@@ -20,6 +20,8 @@ func FuzzFit(f *testing.F) {
 	}{
 		{"holt-winters", Settings{"season": {Word: "multiplicative"}, "damped": {Word: "yes"}}},
 		{"holt-winters", Settings{"season": {Word: "multiplicative"}, "alpha": {Number: 1}, "beta": {Number: 1}, "gamma": {Number: 1}}},
+		{"holt-winters", Settings{"season": {Word: "multiplicative"}, "start": {Word: "estimated"}}},
+		{"damped", Settings{"start": {Word: "estimated"}}},
 		{"regression", Settings{"trend": {Word: "exponential"}}},
 		{"regression", Settings{"trend": {Word: "quadratic"}}},
 	}

@@ -2,6 +2,7 @@ package forecast
 
 import (
 	"math"
+	"strings"
 	"testing"
 )
 
@@ -23,9 +24,13 @@ func TestCompetitionQuarterly(t *testing.T) {
 		t.Fatalf("read %d series, want 756", len(series))
 	}
 	scores := map[string]float64{}
-	for _, name := range []string{"naive2", "seasonal-naive", "ses", "damped", "holt-winters", "theta"} {
+	for _, row := range []string{"naive2", "seasonal-naive", "ses", "damped", "holt-winters", "theta", "holt-winters start=estimated"} {
+		name, settings := row, Settings(nil)
+		if base, ok := strings.CutSuffix(row, " start=estimated"); ok {
+			name, settings = base, Settings{"start": {Word: "estimated"}}
+		}
 		sp, _ := Lookup(name)
-		m, err := sp.New(nil)
+		m, err := sp.New(settings)
 		if err != nil {
 			t.Fatal(err)
 		}
@@ -51,8 +56,8 @@ func TestCompetitionQuarterly(t *testing.T) {
 				count++
 			}
 		}
-		scores[name] = smape / float64(count)
-		t.Logf("%-14s sMAPE %.2f  MASE %.3f  (%d series refused)", name, smape/float64(count), mase/float64(count), failed)
+		scores[row] = smape / float64(count)
+		t.Logf("%-28s sMAPE %.2f  MASE %.3f  (%d series refused)", row, smape/float64(count), mase/float64(count), failed)
 		if failed > 0 {
 			t.Errorf("%s refused %d series", name, failed)
 		}

@@ -35,6 +35,11 @@ type Smoothing struct {
 	Alpha, Beta, Gamma, Phi *float64  // fixed constants; nil estimates them
 	Level0, Trend0          *float64  // fixed initial states; nil uses the heuristic
 	Season0                 []float64 // fixed initial seasonal states, one per period of the cycle
+
+	// EstimateStates estimates the initial states not given by hand
+	// together with the open constants (smoothing_start.go) instead of
+	// taking them from the heuristic.
+	EstimateStates bool
 }
 
 // Name returns "ses", "holt", "damped" or "holt-winters".
@@ -91,6 +96,24 @@ func (s Smoothing) Fit(y []float64, season int) (*Fit, error) {
 		}
 	}
 	sol := pr.solve()
+	if s.EstimateStates {
+		var open []int
+		if s.Level0 == nil {
+			open = append(open, nConst)
+		}
+		if s.Trend && s.Trend0 == nil {
+			open = append(open, nConst+1)
+		}
+		if s.Season != NoSeason && s.Season0 == nil {
+			for j := range form.m {
+				open = append(open, nConst+2+j)
+			}
+		}
+		if len(open) > 0 {
+			sol, init = pr.solveStates(sol, open)
+			how = "the initial states not given by hand were estimated with the constants by minimising the in-sample squared error, starting from the first values (" + how + ")"
+		}
+	}
 	tr := form.run(y, sol.p, init)
 	n := len(y)
 	f := &Fit{
@@ -103,7 +126,7 @@ func (s Smoothing) Fit(y []float64, season int) (*Fit, error) {
 		Components:  map[string][]float64{"level": tr.level},
 		Evaluations: 0,
 	}
-	if len(pr.free) > 0 {
+	if len(pr.free) > 0 || s.EstimateStates {
 		f.Evaluations = sol.evals
 	}
 	if s.Season != NoSeason {
@@ -114,6 +137,7 @@ func (s Smoothing) Fit(y []float64, season int) (*Fit, error) {
 		f.Components["trend"] = tr.trend
 	}
 	f.Params, f.States = s.report(form, sol.p, init, pr.free)
+
 	f.Stats = []Param{
 		{Name: "sse", Value: tr.sse, Estimated: true},
 		{Name: "sigma2", Value: f.sigma2, Estimated: true},

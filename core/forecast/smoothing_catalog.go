@@ -36,6 +36,14 @@ func trend0Param() ParamSpec {
 		Help: "trend per period before the first value; by default set from the first values"}
 }
 
+func startParam() ParamSpec {
+	return ParamSpec{Name: "start", Kind: Choice, Choices: []string{"first-values", "estimated"}, Default: "first-values",
+		Help: "how the initial states are set: from the first values by a fixed rule, or estimated with the smoothing constants (slower, closer fit)"}
+}
+
+// estimated reports whether the settings ask for estimated initial states.
+func estimated(st Settings) bool { return st.word("start", "first-values") == "estimated" }
+
 func sesSpec() Spec {
 	return Spec{
 		Name: "ses", Title: "Simple exponential smoothing",
@@ -43,9 +51,9 @@ func sesSpec() Spec {
 		Source:  smoothingSource,
 		Assumes: "a level that wanders slowly: no trend and no season",
 		Follows: Patterns{Level: true},
-		Params:  []ParamSpec{alphaParam(), level0Param()},
+		Params:  []ParamSpec{alphaParam(), level0Param(), startParam()},
 		New: func(st Settings) (Method, error) {
-			return Smoothing{Alpha: st.optional("alpha"), Level0: st.optional("level0")}, nil
+			return Smoothing{Alpha: st.optional("alpha"), Level0: st.optional("level0"), EstimateStates: estimated(st)}, nil
 		},
 	}
 }
@@ -57,10 +65,10 @@ func holtSpec() Spec {
 		Source:  smoothingSource,
 		Assumes: "a trend that changes slowly and no season",
 		Follows: Patterns{Level: true, Trend: true},
-		Params:  []ParamSpec{alphaParam(), betaParam(), level0Param(), trend0Param()},
+		Params:  []ParamSpec{alphaParam(), betaParam(), level0Param(), trend0Param(), startParam()},
 		New: func(st Settings) (Method, error) {
 			return Smoothing{Trend: true, Alpha: st.optional("alpha"), Beta: st.optional("beta"),
-				Level0: st.optional("level0"), Trend0: st.optional("trend0")}, nil
+				Level0: st.optional("level0"), Trend0: st.optional("trend0"), EstimateStates: estimated(st)}, nil
 		},
 	}
 }
@@ -72,10 +80,10 @@ func dampedSpec() Spec {
 		Source:  smoothingSource + "; E. S. Gardner Jr and E. McKenzie (1985), Management Science 31(10), 1237-1246",
 		Assumes: "a trend that will not last forever and no season",
 		Follows: Patterns{Level: true, Trend: true},
-		Params:  []ParamSpec{alphaParam(), betaParam(), phiParam(), level0Param(), trend0Param()},
+		Params:  []ParamSpec{alphaParam(), betaParam(), phiParam(), level0Param(), trend0Param(), startParam()},
 		New: func(st Settings) (Method, error) {
 			return Smoothing{Trend: true, Damped: true, Alpha: st.optional("alpha"), Beta: st.optional("beta"),
-				Phi: st.optional("phi"), Level0: st.optional("level0"), Trend0: st.optional("trend0")}, nil
+				Phi: st.optional("phi"), Level0: st.optional("level0"), Trend0: st.optional("trend0"), EstimateStates: estimated(st)}, nil
 		},
 	}
 }
@@ -95,11 +103,13 @@ func holtWintersSpec() Spec {
 			alphaParam(), betaParam(), gammaParam(), phiParam(), cycleParam(), level0Param(), trend0Param(),
 			{Name: "season0", Kind: List,
 				Help: "seasonal states before the first value, one per period of the cycle, separated by commas; by default set from the first season"},
+			startParam(),
 		},
 		New: func(st Settings) (Method, error) {
 			m := Smoothing{Trend: true, Season: Additive, Cycle: st.whole("cycle"),
 				Alpha: st.optional("alpha"), Beta: st.optional("beta"), Gamma: st.optional("gamma"),
-				Phi: st.optional("phi"), Level0: st.optional("level0"), Trend0: st.optional("trend0")}
+				Phi: st.optional("phi"), Level0: st.optional("level0"), Trend0: st.optional("trend0"),
+				EstimateStates: estimated(st)}
 			if st.word("season", "additive") == "multiplicative" {
 				m.Season = Multiplicative
 			}

@@ -64,3 +64,49 @@ func seededSeasonal(rng *rand.Rand, n, m int) []float64 {
 	}
 	return y
 }
+
+// TestSSEGradientFull compares the gradient over constants and initial
+// states with central finite differences.
+func TestSSEGradientFull(t *testing.T) {
+	rng := rand.New(rand.NewPCG(7, 11))
+	y := seededSeasonal(rng, 40, 4)
+	p := [nConst]float64{0.4, 0.2, 0.3, 0.9}
+	for _, f := range []esForm{{m: 1}, {trend: true, m: 1}, {trend: true, season: Additive, m: 4}, {trend: true, season: Multiplicative, m: 4}} {
+		t.Run(f.season.String()+map[bool]string{true: " trend", false: ""}[f.trend], func(t *testing.T) {
+			init, _ := f.heuristicStates(y)
+			w := newFullWork(f)
+			g := make([]float64, f.nVars())
+			sse := f.sseGradFull(y, p, init, w, g)
+			if plain := f.sseGrad(y, p, init, newESWork(f.m), nil); !within(sse, plain, 1e-9, 1e-12) {
+				t.Errorf("SSE %g, plain pass %g", sse, plain)
+			}
+			scratch := make([]float64, f.nVars())
+			eval := func(k int, step float64) float64 {
+				q, st := p, esStates{level: init.level, trend: init.trend, season: clone(init.season)}
+				switch {
+				case k < nConst:
+					q[k] += step
+				case k == nConst:
+					st.level += step
+				case k == nConst+1:
+					st.trend += step
+				default:
+					st.season[k-nConst-2] += step
+				}
+				return f.sseGradFull(y, q, st, w, scratch)
+			}
+			for k := range f.nVars() {
+				if k >= nConst+2 && f.season == NoSeason {
+					continue
+				}
+				h := 1e-6 * max(1, abs(init.level)*float64(min(k/nConst, 1)))
+				num := (eval(k, h) - eval(k, -h)) / (2 * h)
+				if abs(num-g[k]) > 1e-4*(1+abs(num)) {
+					t.Errorf("variable %d: gradient %g, finite difference %g", k, g[k], num)
+				}
+			}
+		})
+	}
+}
+
+func abs(x float64) float64 { return math.Abs(x) }
