@@ -107,6 +107,7 @@ func (x *exec) backtest() error {
 	for _, l := range labels {
 		if f := x.st.forecastNamed(l); f != nil && len(f.bands) > 0 && f.bands[0].empirical {
 			x.table("Forecast "+f.label+" with empirical intervals, "+x.futureSpan(len(f.future)), forecastTable(x, f), intervalSource(f))
+			x.chart("Forecast "+f.label+" with empirical intervals", "forecast-"+fileSafe(f.label)+"-empirical", forecastChart(x, f), "")
 		}
 	}
 	x.message(Warning, "%s", intervalsNarrow)

@@ -108,9 +108,17 @@ func (res *Result) comparisonSection() memo.Section {
 
 // chartsSection repeats the charts a reader needs: the series, the holdout
 // comparison and errors, the sweeps, accuracy by horizon, the
-// decomposition, residual checks and the recommended forecast.
+// decomposition, residual checks and the recommended forecast (with its
+// empirical intervals when a backtest gave them).
 func (res *Result) chartsSection(rec *fcast) memo.Section {
 	s := memo.Section{Kind: memo.Charts}
+	recChart := ""
+	if rec != nil {
+		recChart = "forecast-" + fileSafe(rec.label)
+		if len(rec.bands) > 0 && rec.bands[0].empirical {
+			recChart += "-empirical"
+		}
+	}
 	for _, o := range res.Outputs {
 		if o.Status != Done {
 			continue
@@ -122,10 +130,9 @@ func (res *Result) chartsSection(rec *fcast) memo.Section {
 			switch o.Verb {
 			case "split", "smooth", "difference":
 				continue
-			case "forecast", "combine":
-				if rec == nil || o.Step != rec.step {
-					continue
-				}
+			}
+			if stem := toChart(b).Stem; strings.HasPrefix(stem, "forecast-") && stem != recChart {
+				continue
 			}
 			s.Blocks = append(s.Blocks, toChart(b))
 		}
