@@ -70,7 +70,7 @@ func documentOf(partsJSON string) (*session.Document, error) {
 			blocks = append(blocks, session.Part{Kind: session.Data, Name: p.Name, Body: p.Text})
 		case "prose":
 			if strings.TrimSpace(p.Text) != "" {
-				blocks = append(blocks, session.Part{Kind: session.Prose, Body: strings.TrimRight(p.Text, "\n") + "\n"})
+				blocks = append(blocks, session.Part{Kind: session.Prose, Body: strings.Trim(p.Text, "\n") + "\n"})
 			}
 		default:
 			return nil, fmt.Errorf("the page sent a part of kind %q, which the engine does not know; reload the page", p.Kind)
