@@ -242,6 +242,7 @@ func forecastChart(x *exec, f *fcast) string {
 			{Name: f.label + " (ahead)", Values: ahead, Role: chart.Forecast, Bands: bands},
 		},
 		HoldoutStart: hs,
+		HoldoutEnd:   n,
 		HoldoutLabel: "validation",
 	}.SVG()
 }
