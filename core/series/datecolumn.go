@@ -69,7 +69,11 @@ func (r *reader) dateColumn(c int) (Frequency, []int) {
 	if written == NoFrequency {
 		for i, row := range r.rows {
 			if b := trimCell(r.t.cell(int(row), c)); !isMissing(b, r.opt.Missing) {
-				r.fail(i, c, string(b), ErrNotDate, fmt.Sprintf("%s is not a period, and no cell of the column is; write periods as 2024-03-01, 2024-W05, 2024-03, 2024-Q1 or 2024, or choose another period column", quoteCell(string(b))))
+				why := "is not a period, and no cell of the column is"
+				if twoDigitYear(b) {
+					why = "has a two-digit year, and so do the other cells of the column"
+				}
+				r.fail(i, c, string(b), ErrNotDate, fmt.Sprintf("%s %s; write periods as 2024-03-01, 2024-W05, 2024-03, 2024-Q1 or 2024, or choose another period column", quoteCell(string(b)), why))
 				break
 			}
 		}
@@ -81,6 +85,8 @@ func (r *reader) dateColumn(c int) (Frequency, []int) {
 		switch f := freqOfShape(d.shape); {
 		case d.shape == shapeNone && isMissing(b, r.opt.Missing):
 			r.fail(i, c, string(b), ErrNotDate, "the period is missing; fill it in or delete the row")
+		case d.shape == shapeNone && twoDigitYear(b):
+			r.fail(i, c, string(b), ErrNotDate, fmt.Sprintf("%s has a two-digit year; write the year with four digits, like the rest of the column (%s)", quoteCell(string(b)), example))
 		case d.shape == shapeNone:
 			r.fail(i, c, string(b), ErrNotDate, fmt.Sprintf("%s is not a period; write it like the rest of the column (%s)", quoteCell(string(b)), example))
 		case f != written:

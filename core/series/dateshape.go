@@ -99,6 +99,9 @@ func scanDate(b []byte) dateCell {
 	if n1 == 4 {
 		return scanYearFirst(b, v1, i)
 	}
+	if n1 <= 2 && i+1 < len(b) && (b[i] == ' ' || b[i] == '-' || b[i] == '/') && (b[i+1]|0x20) >= 'a' && (b[i+1]|0x20) <= 'z' {
+		return scanDayMonthName(b, v1, i+1)
+	}
 	if n1 > 2 || !isDateSep(b[i]) {
 		return dateCell{}
 	}
@@ -166,7 +169,8 @@ func scanYearFirst(b []byte, y, i int) dateCell {
 	return withTime(cellOf(shapeYMD, y, m, d), b, k)
 }
 
-// scanLetterFirst handles "Q1 2024", "Mar 2024", "March 2024", "Mar-2024".
+// scanLetterFirst handles "Q1 2024", "Mar 2024", "March 2024", "Mar-2024"
+// and "Mar 1, 2024".
 func scanLetterFirst(b []byte) dateCell {
 	if b[0]|0x20 == 'q' && len(b) >= 7 && b[1] >= '1' && b[1] <= '4' && (b[2] == ' ' || b[2] == '-' || b[2] == '/') {
 		y, n, j := digits(b, 3)
@@ -189,11 +193,54 @@ func scanLetterFirst(b []byte) dateCell {
 	if b[i] != ' ' && b[i] != '-' && b[i] != '/' {
 		return dateCell{}
 	}
-	y, n, j := digits(b, i+1)
+	v, n, j := digits(b, i+1)
+	if n >= 1 && n <= 2 && b[i] == ' ' && j+6 <= len(b) && b[j] == ',' && b[j+1] == ' ' { // Mar 1, 2024
+		y, n, k := digits(b, j+2)
+		if n != 4 || v < 1 || v > 31 {
+			return dateCell{}
+		}
+		return withTime(cellOf(shapeYMD, y, m, v), b, k)
+	}
 	if n != 4 || j != len(b) {
 		return dateCell{}
 	}
-	return cellOf(shapeMonY, y, m, 0)
+	return cellOf(shapeMonY, v, m, 0)
+}
+
+// scanDayMonthName handles "1 Mar 2024", "01-Mar-2024", "1/March/2024";
+// day d has been read and b[i] starts the month name.
+func scanDayMonthName(b []byte, d, i int) dateCell {
+	sep := b[i-1]
+	j := i
+	for j < len(b) && (b[j]|0x20) >= 'a' && (b[j]|0x20) <= 'z' {
+		j++
+	}
+	m := monthNumber(b[i:j])
+	if j < len(b) && b[j] == '.' {
+		j++
+	}
+	if m == 0 || d < 1 || d > 31 || j >= len(b) || b[j] != sep {
+		return dateCell{}
+	}
+	y, n, k := digits(b, j+1)
+	if n != 4 {
+		return dateCell{}
+	}
+	return withTime(cellOf(shapeYMD, y, m, d), b, k)
+}
+
+// twoDigitYear reports whether a cell looks like a date written with a
+// two-digit year, such as 01/02/24, Mar-24 or 1-Mar-24.
+func twoDigitYear(b []byte) bool {
+	n := len(b)
+	if n < 4 {
+		return false
+	}
+	if b[n-1] < '0' || b[n-1] > '9' || b[n-2] < '0' || b[n-2] > '9' || !(b[n-3] == '/' || b[n-3] == '-' || b[n-3] == '.' || b[n-3] == ' ') {
+		return false
+	}
+	_, lead, _ := digits(b, 0)
+	return lead != 4 // 2024-13 is a wrong month, not a short year
 }
 
 // monthNumber returns 1..12 for an English month name or abbreviation in

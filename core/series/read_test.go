@@ -158,6 +158,12 @@ var readTests = []struct {
 		want: "wide month\nunits 2024-01 [missing 7 8]"},
 	{name: "four-digit numbers with three decimals", in: "month,price\n2024-01,1234.567\n2024-02,2345.678\n",
 		want: "wide month\nprice 2024-01 [1234.567 2345.678]"},
+	{name: "day and month name", in: "date,units\n1 Mar 2024,1\n02-Mar-2024,2\n3/March/2024,3\n",
+		want: "wide day\nunits 2024-03-01 [1 2 3]"},
+	{name: "month name, day and year", in: "date,units\n\"Mar 1, 2024\",1\n\"Mar 2, 2024\",2\n",
+		want: "wide day\nunits 2024-03-01 [1 2]"},
+	{name: "dotted day-first dates", in: "Datum;Umsatz\n31.01.2024;1.234,56\n01.02.2024;99,5\n",
+		want: "wide day\nUmsatz 2024-01-31 [1234.56 99.5]", decision: "read day first"},
 	{name: "ISO week 53", in: "week,units\n2020-W52,1\n2020-W53,2\n2021-W01,3\n",
 		want: "wide week\nunits 2020-W52 [1 2 3]"},
 }
