@@ -78,7 +78,7 @@ func (x *exec) sweep() error {
 	low, high := "", ""
 	if !whole {
 		// A small smoothing constant smooths more.
-		low, high = "over-smoothing: flattens the pattern", "under-smoothing: chases noise"
+		low, high = "over-smoothing", "under-smoothing: chases noise"
 	}
 	x.showSweep(o.Key, by, values, train, valid, g.Best, g.BestValidation, g.HasValidation, g.Explanation, low, high)
 	for _, r := range g.Rows {
@@ -161,7 +161,11 @@ func (x *exec) showSweep(param string, by accuracy.Measure, values, train, valid
 	}
 	x.table(fmt.Sprintf("%s by %s, %s", name, param, x.s.Subject),
 		&Table{Headers: []string{param, name + " training", name + " validation", ""}, Rows: rows, Right: []bool{true, true, true, false}}, "")
-	x.message(Info, "Best %s on the training period: %s.", param, numIn(best, dp))
+	if hasValid {
+		x.message(Info, "Best %s on the training period: %s; on the validation period: %s (marked on the chart).", param, numIn(best, dp), numIn(bestValid, dp))
+	} else {
+		x.message(Info, "Best %s on the training period: %s (marked on the chart).", param, numIn(best, dp))
+	}
 	if explain != "" {
 		x.message(Info, "%s", explain)
 	}
