@@ -2,6 +2,7 @@ package forecast
 
 import (
 	"fmt"
+	"math"
 	"strconv"
 )
 
@@ -96,35 +97,23 @@ func (s Smoothing) Fit(y []float64, season int) (*Fit, error) {
 		}
 	}
 	sol := pr.solve()
-	if s.EstimateStates {
-		var open []int
-		if s.Level0 == nil {
-			open = append(open, nConst)
-		}
-		if s.Trend && s.Trend0 == nil {
-			open = append(open, nConst+1)
-		}
-		if s.Season != NoSeason && s.Season0 == nil {
-			for j := range form.m {
-				open = append(open, nConst+2+j)
-			}
-		}
-		if len(open) > 0 {
-			sol, init = pr.solveStates(sol, open)
-			how = "the initial states not given by hand were estimated with the constants by minimising the in-sample squared error, starting from the first values (" + how + ")"
-		}
+	if open := s.openStates(form); s.EstimateStates && len(open) > 0 {
+		sol, init = pr.solveStates(sol, open)
+		how = "the initial states not given by hand were estimated with the constants by minimising the in-sample squared error, starting from the first values (" + how + ")"
 	}
 	tr := form.run(y, sol.p, init)
+	if math.IsInf(tr.sse, 0) || math.IsNaN(tr.sse) {
+		return nil, &Error{Cause: ErrNotPositive, Msg: name + " broke down on this series: the smoothed level reached zero, so the seasonal ratios cannot be formed; use an additive season"}
+	}
 	n := len(y)
 	f := &Fit{
 		Method: name, N: n, Season: season, Fitted: tr.fitted,
 		Init: how, Converged: sol.converged,
-		Follows:     Patterns{Level: true, Trend: s.Trend, Season: s.Season != NoSeason},
-		train:       clone(y),
-		sigma2:      tr.sse / float64(n),
-		hasSigma2:   true,
-		Components:  map[string][]float64{"level": tr.level},
-		Evaluations: 0,
+		Follows:    Patterns{Level: true, Trend: s.Trend, Season: s.Season != NoSeason},
+		train:      clone(y),
+		sigma2:     tr.sse / float64(n),
+		hasSigma2:  true,
+		Components: map[string][]float64{"level": tr.level},
 	}
 	if len(pr.free) > 0 || s.EstimateStates {
 		f.Evaluations = sol.evals
@@ -137,7 +126,6 @@ func (s Smoothing) Fit(y []float64, season int) (*Fit, error) {
 		f.Components["trend"] = tr.trend
 	}
 	f.Params, f.States = s.report(form, sol.p, init, pr.free)
-
 	f.Stats = []Param{
 		{Name: "sse", Value: tr.sse, Estimated: true},
 		{Name: "sigma2", Value: f.sigma2, Estimated: true},
@@ -150,6 +138,24 @@ func (s Smoothing) Fit(y []float64, season int) (*Fit, error) {
 		f.Notes = append(f.Notes, "no analytic prediction interval for a multiplicative season here; use empirical intervals from a backtest")
 	}
 	return f, nil
+}
+
+// openStates lists the initial states not given by hand, as indices of
+// the full variable layout (smoothing_fullgrad.go).
+func (s Smoothing) openStates(form esForm) []int {
+	var open []int
+	if s.Level0 == nil {
+		open = append(open, nConst)
+	}
+	if s.Trend && s.Trend0 == nil {
+		open = append(open, nConst+1)
+	}
+	if s.Season != NoSeason && s.Season0 == nil {
+		for j := range form.m {
+			open = append(open, nConst+2+j)
+		}
+	}
+	return open
 }
 
 // problem checks the fixed constants and states and sets up the estimation.

@@ -123,6 +123,7 @@ func TestSmoothingErrors(t *testing.T) {
 		{"phi zero", Smoothing{Trend: true, Damped: true, Phi: ptr(0)}, []float64{1, 2, 3}, 0, ErrSetting, "phi=0"},
 		{"season0 length", Smoothing{Trend: true, Season: Additive, Season0: []float64{1, 2}}, seededSeasonalFixed(), 4, ErrSetting, "has 2 values"},
 		{"nan", Smoothing{}, []float64{1, math.NaN(), 3}, 0, ErrBadValue, "value 2"},
+		{"zero seasonal ratio", Smoothing{Trend: true, Season: Multiplicative, Alpha: ptr(0.5), Beta: ptr(0.1), Gamma: ptr(0.1), Season0: []float64{0, 1, 1, 1}}, seededSeasonalFixed(), 4, ErrNotPositive, "broke down"},
 	}
 	for _, tt := range tests {
 		t.Run(tt.name, func(t *testing.T) {
