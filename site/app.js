@@ -199,7 +199,15 @@ function wire() {
     e.target.value = "";
     if (f) await newSession(f.name.replace(/\.(md|txt)$/i, ""), await f.text());
   });
-  $("export-session").addEventListener("click", () => download(fileName(session.title, ".md"), "text/markdown", session.text));
+  $("export-session").addEventListener("click", async () => {
+    try {
+      const text = await call("exportSession", JSON.stringify(session.parts), $("export-with-data").checked);
+      download(fileName(session.title, ".md"), "text/markdown", text);
+      setStatus($("export-with-data").checked ? "Session saved with its data inside: treat the file as confidential." : "Session saved without data: it carries steps and notes only.");
+    } catch (e) {
+      setStatus(`Not saved: ${explain(e)}`, true);
+    }
+  });
   $("memo-preview").addEventListener("click", () => previewMemo($("memo-body"), $("memo-dialog")).catch((e) => setStatus(`No memo: ${explain(e)}`, true)));
   for (const b of document.querySelectorAll("[data-memo]")) {
     b.addEventListener("click", async () => {

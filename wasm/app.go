@@ -61,6 +61,7 @@ func (a *app) functions() map[string]js.Func {
 		"deleteSession":    asyncFunc("deleteSession", a.deleteSession),
 		"forgetAll":        asyncFunc("forgetAll", a.forgetAll),
 		"memo":             asyncFunc("memo", a.memoOf),
+		"exportSession":    asyncFunc("exportSession", a.exportSession),
 	}
 }
 

@@ -130,6 +130,12 @@ func startBrowser(t *testing.T, base *url.URL) *page {
 		cancelCtx()
 		cancelAlloc()
 	})
+	return watch(t, ctx, base)
+}
+
+// watch starts the tab of ctx and records its requests and console.
+func watch(t *testing.T, ctx context.Context, base *url.URL) *page {
+	t.Helper()
 	p := &page{t: t, ctx: ctx, base: base}
 	if err := chromedp.Do(ctx); err != nil {
 		t.Fatalf("starting Chromium: %v", err)
@@ -139,6 +145,14 @@ func startBrowser(t *testing.T, base *url.URL) *page {
 	}
 	go p.readConsole()
 	return p
+}
+
+// newTab opens a second tab of the same browser (sharing its storage).
+func (p *page) newTab() *page {
+	p.t.Helper()
+	ctx, cancel := chromedp.NewContext(p.ctx)
+	p.t.Cleanup(cancel)
+	return watch(p.t, ctx, p.base)
 }
 
 // record notes every request the page is about to send.

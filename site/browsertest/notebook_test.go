@@ -139,3 +139,43 @@ func TestMemo(t *testing.T) {
 	}
 	p.checkClean(ready)
 }
+
+// editStep replaces the text of the step line starting with prefix and
+// runs it.
+func editStep(p *page, prefix, text string) {
+	p.t.Helper()
+	sel := stepSelector(p, prefix)
+	p.run("editing "+prefix, 20*time.Second,
+		chromedp.Click(chromedp.CSS(sel)),
+		chromedp.WaitVisible(chromedp.CSS("input.line-edit")),
+		chromedp.SetValue(chromedp.CSS("input.line-edit"), text),
+		chromedp.KeyEvent("\r"),
+	)
+	waitFor(p, "the edited line", fmt.Sprintf(`[...document.querySelectorAll('#parts code.line')].some(n => n.textContent === %q)`, text))
+}
+
+// TestAnotherTabsSave opens the same session in two tabs: the second tab's
+// save must not overwrite the first one's silently.
+func TestAnotherTabsSave(t *testing.T) {
+	a := openSite(t)
+	readyA := a.open("")
+	b := a.newTab()
+	readyB := b.open("")
+
+	editStep(a, "split last=12", "split last=6")
+	waitFor(a, "tab A's save", `document.documentElement.dataset.saved && /^[0-9]+$/.test(document.documentElement.dataset.saved)`)
+
+	editStep(b, "evaluate by=mase", "evaluate by=rmse")
+	waitFor(b, "the warning about the other tab", `!document.getElementById('banner').hidden && document.getElementById('banner').textContent.includes('another tab')`)
+	b.screenshot("conflict-banner")
+	if got := eval[string](b, `document.documentElement.dataset.saved`); got != "failed" {
+		t.Errorf("tab B's save state is %q, want failed", got)
+	}
+
+	// Tab B takes the other tab's version: tab A's edit appears, tab B's
+	// unsaved edit is dropped only on this explicit choice.
+	b.run("loading the other tab's version", 10*time.Second, chromedp.Click(chromedp.CSS("#banner button")))
+	waitFor(b, "tab A's edit in tab B", `[...document.querySelectorAll('#parts code.line')].some(n => n.textContent === 'split last=6')`)
+	a.checkClean(readyA)
+	b.checkClean(readyB)
+}
