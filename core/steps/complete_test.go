@@ -1,6 +1,7 @@
 package steps
 
 import (
+	"encoding/json"
 	"strings"
 	"testing"
 )
@@ -71,6 +72,9 @@ func TestCompleteAgreesWithParser(t *testing.T) {
 func TestHelp(t *testing.T) {
 	t.Parallel()
 	h := Help()
+	if _, err := json.Marshal(h); err != nil {
+		t.Fatalf("the help page does not encode as JSON: %v", err)
+	}
 	if len(h.Verbs) != len(Verbs()) {
 		t.Fatalf("help lists %d verbs, the language has %d", len(h.Verbs), len(Verbs()))
 	}

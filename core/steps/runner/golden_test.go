@@ -80,7 +80,10 @@ func TestDeterministic(t *testing.T) {
 	t.Parallel()
 	doc, data := sessionFile(t, "demo.md"), demoData(t)
 	r := New()
-	first, _ := json.Marshal(r.Run(t.Context(), doc, data))
+	first, err := json.Marshal(r.Run(t.Context(), doc, data))
+	if err != nil {
+		t.Fatalf("the result does not encode as JSON: %v", err)
+	}
 	again, _ := json.Marshal(r.Run(t.Context(), doc, data))
 	fresh, _ := json.Marshal(New().Run(t.Context(), doc, data))
 	if !bytes.Equal(first, again) || !bytes.Equal(first, fresh) {
