@@ -25,7 +25,7 @@ func (x *exec) measure(def string) accuracy.Measure {
 	return m
 }
 
-// scaleOf is the MASE scale of the training period: the mean absolute
+// scale is the MASE scale of the training period: the mean absolute
 // difference at the season's lag (lag 1 without a season).
 func (st *state) scale() accuracy.Scale {
 	return accuracy.NaiveScale(st.data.y[:st.trainEnd()], max(st.data.season, 1))

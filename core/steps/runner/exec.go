@@ -140,7 +140,8 @@ func count(n int, one, many string) string {
 	return format.Int(n) + " " + many
 }
 
-// periodsOf returns the labels of positions from..to-1 of the loaded series.
+// label returns the label of position i of the loaded series, or of a
+// period past its end.
 func (x *exec) label(i int) string {
 	d := x.st.data
 	if i >= 0 && i < len(d.periods) {

@@ -1,6 +1,7 @@
 package runner
 
 import (
+	"context"
 	"strings"
 	"testing"
 
@@ -123,5 +124,28 @@ func TestFaultHook(t *testing.T) {
 		if got[i] != want[i] {
 			t.Errorf("step %d: %s, want %s", i+1, got[i], want[i])
 		}
+	}
+}
+
+// TestCancelled checks that a cancelled run says so on every step and that
+// nothing it left unfinished is reused by the next run.
+func TestCancelled(t *testing.T) {
+	t.Parallel()
+	r := New()
+	ctx, cancel := context.WithCancel(t.Context())
+	cancel()
+	doc := stepsDoc("load orders.csv\nsplit last=12")
+	res := r.Run(ctx, doc, testData())
+	for _, o := range res.Outputs {
+		if o.Status == Done {
+			t.Errorf("step %d ran although the run was stopped", o.Step)
+		}
+	}
+	if e := res.Outputs[0].Error; e == nil || !strings.Contains(e.Msg, "stopped") {
+		t.Errorf("step 1: %v", e)
+	}
+	again := r.Run(t.Context(), doc, testData())
+	if again.Computed != 2 || again.Outputs[1].Status != Done {
+		t.Errorf("after the stop: computed %d, step 2 %s", again.Computed, again.Outputs[1].Status)
 	}
 }

@@ -5,7 +5,6 @@ import (
 	"crypto/sha256"
 	"encoding/hex"
 	"fmt"
-	"runtime/debug"
 
 	"quillcast/core/series"
 	"quillcast/core/session"
@@ -64,7 +63,11 @@ func (r *Runner) Run(ctx context.Context, doc *session.Document, data Data) *Res
 		after, out := r.runStep(ctx, st, s, data)
 		res.add(out)
 		res.Computed++
-		next[key] = cached{after: after, out: out}
+		if ctx.Err() == nil {
+			// A step cut short by cancellation is not kept: the next
+			// run does it properly.
+			next[key] = cached{after: after, out: out}
+		}
 		st = after
 	}
 	r.cache = next
@@ -150,7 +153,6 @@ func (r *Runner) runStep(ctx context.Context, st *state, s *steps.Step, data Dat
 	}
 	defer func() {
 		if p := recover(); p != nil {
-			_ = debug.Stack()
 			after, out = fail(st, s, Output{Step: s.N, Line: s.Line, Text: s.Text, Verb: s.Verb, Blocks: []Block{}},
 				runError(s, s.Column, fmt.Sprintf("the step stopped on an internal fault (%v); the steps before it are unaffected. Please report this session", p)))
 		}
