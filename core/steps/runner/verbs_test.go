@@ -152,3 +152,23 @@ func TestDatasetAttached(t *testing.T) {
 		}
 	}
 }
+
+// TestEmbeddedData runs a session that carries its data in a data block,
+// as when the user asks for it; an attached file of the same name wins.
+func TestEmbeddedData(t *testing.T) {
+	t.Parallel()
+	text := "```quill-data tiny.csv\n" + string(synthetic(30, 50, 1, 5)) + "```\n\n```quill\nload tiny.csv\nsplit last=6\nforecast naive\n```\n"
+	res := New().Run(t.Context(), sessionOf(text), Data{})
+	for _, o := range res.Outputs {
+		if o.Status != Done {
+			t.Fatalf("step %d: %s %v", o.Step, o.Status, o.Error)
+		}
+	}
+	if !strings.Contains(blockTexts(res.Outputs[0]), "2020-01 to 2022-06") {
+		t.Errorf("embedded data not used:\n%s", blockTexts(res.Outputs[0]))
+	}
+	attached := New().Run(t.Context(), sessionOf(text), Data{Files: map[string][]byte{"tiny.csv": synthetic(40, 50, 1, 5)}})
+	if !strings.Contains(blockTexts(attached.Outputs[0]), "2020-01 to 2023-04") {
+		t.Errorf("attached file did not win:\n%s", blockTexts(attached.Outputs[0]))
+	}
+}
