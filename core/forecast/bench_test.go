@@ -52,13 +52,21 @@ func BenchmarkDifferenced(b *testing.B) {
 }
 
 // BenchmarkHoltWinters144 fits additive and multiplicative Holt-Winters,
-// all three constants estimated, to 144 monthly points and reports the
-// SSE evaluations per fit.
+// all three constants estimated (and the 14 initial states too with
+// start=estimated), to 144 monthly points and reports the SSE evaluations
+// per fit.
 func BenchmarkHoltWinters144(b *testing.B) {
 	y := benchSeries(144)
-	for _, kind := range []SeasonKind{Additive, Multiplicative} {
-		m := Smoothing{Trend: true, Season: kind}
-		b.Run(kind.String(), func(b *testing.B) {
+	for _, c := range []struct {
+		name string
+		m    Smoothing
+	}{
+		{"additive", Smoothing{Trend: true, Season: Additive}},
+		{"multiplicative", Smoothing{Trend: true, Season: Multiplicative}},
+		{"additive/start=estimated", Smoothing{Trend: true, Season: Additive, EstimateStates: true}},
+	} {
+		m := c.m
+		b.Run(c.name, func(b *testing.B) {
 			b.ReportAllocs()
 			evals := 0
 			for b.Loop() {

@@ -111,7 +111,7 @@ func (b boxMin) run(fg func(x, grad []float64) float64, x0 []float64) boxResult 
 // holds; it writes the new point and gradient into xn and gn.
 func (b boxMin) search(fg func(x, grad []float64) float64, x []float64, f float64, g, d, xn, gn []float64, res *boxResult) (float64, bool) {
 	t := 1.0
-	for range 30 {
+	for range 40 {
 		if res.evals >= b.maxEvals {
 			return f, false
 		}

@@ -12,6 +12,14 @@ import "math"
 // fitted with the heuristic states and from the heuristic states
 // themselves, so the result is never worse than the heuristic fit.
 //
+// The seasonal states and the level can trade off exactly (adding c to the
+// level and taking c from every additive seasonal state, or scaling them
+// by c and 1/c for a multiplicative season, leaves every prediction
+// unchanged), which leaves the search a flat valley. The sum of the
+// seasonal states is therefore held at its starting value (0 for the
+// additive heuristic, m for the multiplicative one): the last state is
+// the starting sum minus the others.
+//
 // Bounds, with r the range of the series (max - min, or the size of the
 // values when constant): level0 within [min - r, max + r]; trend0 within
 // [-r, r]; additive seasonal states within [-r, r]; multiplicative ones
@@ -50,9 +58,18 @@ func (f esForm) stateBounds(y []float64) (lo, hi []float64) {
 func (pr *esProblem) solveStates(sol esSolution, states []int) (esSolution, esStates) {
 	f := pr.form
 	init := esStates{level: pr.init.level, trend: pr.init.trend, season: clone(pr.init.season)}
-	vars := append(append([]int(nil), pr.free...), states...)
 	if len(states) == 0 || math.IsInf(sol.sse, 1) || sol.sse == 0 {
 		return sol, init
+	}
+	last := -1 // full-layout index of the dependent seasonal state
+	if f.season != NoSeason && states[len(states)-1] == nConst+2+f.m-1 {
+		last = states[len(states)-1]
+		states = states[:len(states)-1]
+	}
+	vars := append(append([]int(nil), pr.free...), states...)
+	seasonSum := 0.0
+	for _, v := range init.season {
+		seasonSum += v
 	}
 	lo, hi := f.stateBounds(pr.y)
 	full := make([]float64, f.nVars())
@@ -61,14 +78,20 @@ func (pr *esProblem) solveStates(sol esSolution, states []int) (esSolution, esSt
 	}
 	full[nConst], full[nConst+1] = init.level, init.trend
 	copy(full[nConst+2:], init.season)
+	x := clone(full)
 	unpack := func(u []float64) ([nConst]float64, esStates) {
-		x := clone(full)
 		for i, k := range vars {
 			x[k] = lo[k] + u[i]*(hi[k]-lo[k])
 		}
+		if last >= 0 {
+			x[last] = seasonSum
+			for k := nConst + 2; k < last; k++ {
+				x[last] -= x[k]
+			}
+		}
 		var p [nConst]float64
 		copy(p[:], x[:nConst])
-		return p, esStates{level: x[nConst], trend: x[nConst+1], season: clone(x[nConst+2:])}
+		return p, esStates{level: x[nConst], trend: x[nConst+1], season: x[nConst+2:]}
 	}
 	w := newFullWork(f)
 	g := make([]float64, f.nVars())
@@ -79,10 +102,15 @@ func (pr *esProblem) solveStates(sol esSolution, states []int) (esSolution, esSt
 		sse := f.sseGradFull(pr.y, p, st, w, g)
 		best.evals++
 		if sse < best.sse {
-			best.p, best.sse, bestStates = p, sse, st
+			best.p, best.sse = p, sse
+			bestStates = esStates{level: st.level, trend: st.trend, season: clone(st.season)}
 		}
 		for i, k := range vars {
-			grad[i] = g[k] * (hi[k] - lo[k]) / scale
+			gk := g[k]
+			if last >= 0 && k >= nConst+2 {
+				gk -= g[last]
+			}
+			grad[i] = gk * (hi[k] - lo[k]) / scale
 		}
 		if math.IsNaN(sse) {
 			return math.Inf(1)
@@ -95,7 +123,11 @@ func (pr *esProblem) solveStates(sol esSolution, states []int) (esSolution, esSt
 		u0[i] = math.Min(math.Max((full[k]-lo[k])/(hi[k]-lo[k]), 0), 1)
 		uhi[i] = 1
 	}
-	res := boxMin{lo: ulo, hi: uhi, tol: 1e-8, maxEvals: 600}.run(fg, u0)
+	// Tolerance 1e-5 on the projected gradient of the scaled problem: a move
+	// across a variable's whole range would change the SSE by at most
+	// 0.001% to first order. Tighter targets stall on rounding where the
+	// level and seasonal states are strongly correlated.
+	res := boxMin{lo: ulo, hi: uhi, tol: 1e-5, maxEvals: 600}.run(fg, u0)
 	best.converged = res.converged
 	return best, bestStates
 }
