@@ -59,7 +59,7 @@ func (x *exec) forecast() error {
 			h = max(d.season, 1)
 		}
 	}
-	f := &fcast{step: x.s.N, label: label, method: sp.Name, title: sp.Title, text: x.s.Canonical(), model: m,
+	f := &fcast{step: x.s.N, label: label, method: sp.Name, title: sp.Title, assumes: sp.Assumes, text: x.s.Canonical(), model: m,
 		fit: fit, fitted: fit.Fitted, valid: fit.Forecast(nv), horizon: h, params: fit.Params, notes: fit.Notes}
 	// The forecast past the end of the data comes from a refit on every
 	// period, so it starts from the latest level.

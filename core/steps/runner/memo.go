@@ -32,7 +32,7 @@ func (res *Result) Memo(version string) memo.Memo {
 		res.comparisonSection(),
 		res.chartsSection(rec),
 		res.forecastSection(rec),
-		res.cautionsSection(),
+		res.cautionsSection(rec),
 		res.notesSection(),
 		res.appendixSection(version),
 	)

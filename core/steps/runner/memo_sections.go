@@ -184,9 +184,12 @@ func intervalSource(f *fcast) string {
 	return "Intervals come from the method's formula; stated intervals tend to be too narrow."
 }
 
-func (res *Result) cautionsSection() memo.Section {
+func (res *Result) cautionsSection(rec *fcast) memo.Section {
 	st := res.final
 	var items []string
+	if rec != nil && rec.assumes != "" {
+		items = append(items, fmt.Sprintf("The recommended method, %s (%s), assumes %s.", rec.label, rec.title, strings.TrimSuffix(rec.assumes, ".")))
+	}
 	if st != nil {
 		items = append(items, st.cautions...)
 		if st.data != nil && st.split == nil {

@@ -38,6 +38,7 @@ type fcast struct {
 	label    string
 	method   string          // catalogue name, or "combination"
 	title    string          // display name of the method
+	assumes  string          // what the method assumes, in plain words
 	text     string          // the step's canonical text, for the memo appendix
 	model    forecast.Method // what a backtest refits; nil when it cannot be refitted
 	fit      *forecast.Fit   // fit on the training period (nil for combinations)
