@@ -19,7 +19,8 @@
 //     holt-winters, additive or multiplicative, damped or not; open
 //     constants are estimated by minimising the in-sample one-step SSE
 //     with an exact gradient and a small bounded quasi-Newton loop
-//     (boxmin.go);
+//     (boxmin.go); initial states come from the first values, or are
+//     estimated too with start=estimated ([Smoothing.EstimateStates]);
 //   - [Regression] on a linear, quadratic or exponential trend with
 //     seasonal dummies;
 //   - [Theta] and [Naive2], with the M3 seasonal adjustment;
