@@ -90,3 +90,30 @@ func TestDeterministic(t *testing.T) {
 		t.Error("the same session and data gave different outputs")
 	}
 }
+
+// TestDemoSessions runs every demo session of testdata/sessions on the demo
+// data: none may fail, and each memo must be complete.
+func TestDemoSessions(t *testing.T) {
+	t.Parallel()
+	data := demoData(t)
+	for _, name := range []string{"demo.md", "shops-bakeoff.md"} {
+		t.Run(name, func(t *testing.T) {
+			res := New().Run(t.Context(), sessionFile(t, name), data)
+			for _, e := range res.Errors {
+				t.Errorf("step failed: %v", e)
+			}
+			for _, o := range res.Outputs {
+				if o.Status != Done {
+					t.Errorf("step %d (%s): %s", o.Step, o.Text, o.Status)
+				}
+			}
+			m := res.Memo("test")
+			if missing := m.Missing(); len(missing) > 0 {
+				t.Errorf("memo lacks sections %v", missing)
+			}
+			if _, err := memo.Markdown(m); err != nil {
+				t.Error(err)
+			}
+		})
+	}
+}
