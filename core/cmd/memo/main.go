@@ -9,7 +9,8 @@
 // It writes, in the output folder, memo.md (Markdown), memo.html (one
 // self-contained page), memo.zip (memo.md, charts and forecasts.csv),
 // charts/*.svg and forecasts.csv. Each data file is attached under its base
-// name, the name the session's load step uses. When a step fails, the
+// name, the name the session's load step uses; a folder attaches every
+// .csv, .tsv and .txt file in it. When a step fails, the
 // command prints every problem with its line and column in the session and
 // exits with status 1, writing nothing.
 package main
@@ -58,18 +59,10 @@ func run(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprintf(stderr, "memo: cannot read the session %s: %v\n", *sessionPath, plainIOError(err))
 		return 1
 	}
-	files := map[string][]byte{}
-	for _, p := range strings.Split(*dataList, ",") {
-		p = strings.TrimSpace(p)
-		if p == "" {
-			continue
-		}
-		b, err := os.ReadFile(p)
-		if err != nil {
-			fmt.Fprintf(stderr, "memo: cannot read the data file %s: %v\n", p, plainIOError(err))
-			return 1
-		}
-		files[filepath.Base(p)] = b
+	files, err := readData(*dataList)
+	if err != nil {
+		fmt.Fprintf(stderr, "memo: %v\n", err)
+		return 1
 	}
 	doc := session.Parse(string(text))
 	res := runner.New().Run(context.Background(), doc, runner.Data{Files: files})
@@ -86,6 +79,35 @@ func run(args []string, stdout, stderr io.Writer) int {
 	}
 	fmt.Fprintf(stdout, "memo written to %s\n", *outDir)
 	return 0
+}
+
+// readData reads the data files named in list, separated by commas, each
+// under its base name. A folder stands for every .csv, .tsv and .txt file
+// in it.
+func readData(list string) (map[string][]byte, error) {
+	files := map[string][]byte{}
+	for _, p := range strings.Split(list, ",") {
+		p = strings.TrimSpace(p)
+		if p == "" {
+			continue
+		}
+		paths := []string{p}
+		if st, err := os.Stat(p); err == nil && st.IsDir() {
+			paths = nil
+			for _, ext := range []string{"*.csv", "*.tsv", "*.txt"} {
+				m, _ := filepath.Glob(filepath.Join(p, ext))
+				paths = append(paths, m...)
+			}
+		}
+		for _, q := range paths {
+			b, err := os.ReadFile(q)
+			if err != nil {
+				return nil, fmt.Errorf("cannot read the data file %s: %v", q, plainIOError(err))
+			}
+			files[filepath.Base(q)] = b
+		}
+	}
+	return files, nil
 }
 
 // write renders the memo in every form and writes the files.

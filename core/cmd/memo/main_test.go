@@ -89,3 +89,16 @@ func TestRunErrors(t *testing.T) {
 		t.Error("an output folder was written despite the errors")
 	}
 }
+
+// TestRunDataFolder attaches a whole folder, as `make memo` does with its
+// default DATA=testdata/demo.
+func TestRunDataFolder(t *testing.T) {
+	t.Parallel()
+	out := t.TempDir()
+	var stdout, stderr bytes.Buffer
+	code := run([]string{"-session", filepath.Join(root(), "testdata", "sessions", "shops-bakeoff.md"),
+		"-data", filepath.Join(root(), "testdata", "demo"), "-out", out}, &stdout, &stderr)
+	if code != 0 {
+		t.Fatalf("exit %d: %s", code, stderr.String())
+	}
+}
