@@ -24,6 +24,31 @@ func Complete(line string, col int) []Suggestion {
 
 // CompleteWith is [Complete] with a catalogue of the caller's choice.
 func CompleteWith(line string, col int, cat Catalog) []Suggestion {
+	return complete(line, col, cat, nil)
+}
+
+// Labels returns the forecast labels that a step written before step n
+// (1-based; len(p.Steps)+1 for a new last line) can name: those made since
+// the last load and split before it.
+func (p *Program) Labels(n int) []string {
+	sc := scope{labels: map[string]int{}}
+	for _, s := range p.Steps {
+		if s.N >= n {
+			break
+		}
+		sc.add(s)
+	}
+	return sc.order
+}
+
+// CompleteAt is [Complete] for a line standing at step n of the program:
+// it also offers the forecast labels made by the steps before it, after
+// check, of= and among=.
+func (p *Program) CompleteAt(n int, line string, col int) []Suggestion {
+	return complete(line, col, DefaultCatalog(), p.Labels(n))
+}
+
+func complete(line string, col int, cat Catalog, labels []string) []Suggestion {
 	runes := []rune(line)
 	if col < 1 {
 		col = 1
@@ -71,14 +96,28 @@ func CompleteWith(line string, col int, cat Catalog) []Suggestion {
 			return nil
 		}
 		vfrom := from + utf8.RuneCountInString(key) + 1
-		for _, c := range valueChoices(o) {
+		choices := valueChoices(o)
+		if o.Kind == Names && labels != nil && o.Name != "methods" {
+			choices = labelChoices(val, labels)
+			last := lastItem(val)
+			vfrom += utf8.RuneCountInString(val) - utf8.RuneCountInString(last)
+			val = last
+		}
+		for _, c := range choices {
 			if strings.HasPrefix(c, val) {
 				out = append(out, Suggestion{Text: c, Label: c, Detail: o.Help, From: vfrom, To: to})
 			}
 		}
 		return out
 	}
-	if len(fields) == 1 && def.Subject.What != "" {
+	if len(fields) == 1 && def.Name == "check" {
+		for _, l := range labels {
+			if strings.HasPrefix(l, word) {
+				out = append(out, Suggestion{Text: l, Label: l, Detail: "a forecast made earlier", From: from, To: to})
+			}
+		}
+	}
+	if len(fields) == 1 && def.Subject.What != "" && def.Name != "check" {
 		for _, c := range subjectChoices(def, cat) {
 			if strings.HasPrefix(c.Label, word) {
 				c.From, c.To = from, to
@@ -124,4 +163,25 @@ func valueChoices(o OptionDef) []string {
 		return []string{o.Example}
 	}
 	return nil
+}
+
+// labelChoices offers the labels not yet in the comma list typed so far.
+func labelChoices(typed string, labels []string) []string {
+	done := strings.Split(typed, ",")
+	done = done[:len(done)-1]
+	var out []string
+	for _, l := range labels {
+		if !contains(done, l) {
+			out = append(out, l)
+		}
+	}
+	return out
+}
+
+// lastItem is the part of a comma list after its last comma.
+func lastItem(s string) string {
+	if i := strings.LastIndexByte(s, ','); i >= 0 {
+		return s[i+1:]
+	}
+	return s
 }

@@ -99,3 +99,46 @@ func TestHelp(t *testing.T) {
 		}
 	}
 }
+
+func TestCompleteAt(t *testing.T) {
+	t.Parallel()
+	p := ParseText(docOf("load a.csv\nsplit last=4\nforecast naive as=nv\nforecast holt-winters as=hw\nevaluate"))
+	tests := []struct {
+		name string
+		n    int
+		line string
+		want []string
+		from int
+	}{
+		{"labels after check, then options", 6, "check §", []string{"nv", "hw", "lags="}, 7},
+		{"labels filtered by prefix", 6, "check h§", []string{"hw"}, 7},
+		{"labels in a list", 6, "combine of=nv,§", []string{"hw"}, 15},
+		{"only labels made before the step", 4, "check §", []string{"nv", "lags="}, 7},
+	}
+	for _, tc := range tests {
+		t.Run(tc.name, func(t *testing.T) {
+			line, _, col := stripMarker(tc.line)
+			got := p.CompleteAt(tc.n, line, col)
+			if len(got) != len(tc.want) {
+				t.Fatalf("%q: got %v, want %v", tc.line, got, tc.want)
+			}
+			for i, s := range got {
+				if s.Text != tc.want[i] || s.From != tc.from {
+					t.Errorf("%q: suggestion %d is %q from column %d, want %q from %d", tc.line, i, s.Text, s.From, tc.want[i], tc.from)
+				}
+			}
+		})
+	}
+}
+
+func BenchmarkComplete(b *testing.B) {
+	p := ParseText(docOf("load a.csv\nsplit last=4\nforecast naive as=nv\nforecast holt-winters as=hw"))
+	for _, line := range []string{"fo", "forecast holt-winters ", "evaluate by=m", "check "} {
+		b.Run(line, func(b *testing.B) {
+			b.ReportAllocs()
+			for b.Loop() {
+				p.CompleteAt(5, line, len(line)+1)
+			}
+		})
+	}
+}
