@@ -28,7 +28,7 @@ func Verbs() []VerbDef {
 	return []VerbDef{
 		{
 			Name:    "memo",
-			Summary: "Sets the memo's title, client, author and date; each option may be given once in the session.",
+			Summary: "Sets the memo's title, client, author and date; a later memo step overrides what an earlier one set.",
 			Options: []OptionDef{
 				opt("title", Text, "the memo's title", "", `"Candle orders, next year"`),
 				opt("client", Text, "who the memo is for", "", `"Wickery & Co."`),
