@@ -76,6 +76,29 @@ func (x *exec) chart(title, file, svg, note string) int {
 	return x.st.exhibits
 }
 
+// placedError is a run error that points at a column of the step (the
+// subject or an option's value) rather than at the verb.
+type placedError struct {
+	col int
+	msg string
+}
+
+func (e *placedError) Error() string { return e.msg }
+
+// errAtSubject returns an error pointing at the step's subject.
+func (x *exec) errAtSubject(format string, args ...any) error {
+	return &placedError{col: x.s.SubjCol, msg: fmt.Sprintf(format, args...)}
+}
+
+// errAtOption returns an error pointing at the value of option key.
+func (x *exec) errAtOption(key, format string, args ...any) error {
+	col := x.s.Column
+	if o, ok := x.s.Option(key); ok {
+		col = o.ValueCol
+	}
+	return &placedError{col: col, msg: fmt.Sprintf(format, args...)}
+}
+
 // option returns the value of option key, if given.
 func (x *exec) option(key string) (steps.Value, bool) {
 	o, ok := x.s.Option(key)

@@ -50,7 +50,7 @@ func (x *exec) dataset() (*series.Dataset, error) {
 	}
 	b, ok := x.data.Files[name]
 	if !ok {
-		return nil, fmt.Errorf("no file named %q is attached; %s", name, attachedHint(x.data))
+		return nil, x.errAtSubject("no file named %q is attached; %s", name, attachedHint(x.data))
 	}
 	return series.Read(b, name, x.readOptions())
 }

@@ -4,6 +4,7 @@ import (
 	"context"
 	"crypto/sha256"
 	"encoding/hex"
+	"errors"
 	"fmt"
 
 	"quillcast/core/series"
@@ -162,7 +163,12 @@ func (r *Runner) runStep(ctx context.Context, st *state, s *steps.Step, data Dat
 	}
 	x := &exec{r: r, ctx: ctx, st: work, s: s, data: data, out: &out}
 	if err := x.run(); err != nil {
-		return fail(st, s, out, runError(s, s.Column, err.Error()))
+		col := s.Column
+		var at *placedError
+		if errors.As(err, &at) {
+			col = at.col
+		}
+		return fail(st, s, out, runError(s, col, err.Error()))
 	}
 	return work, out
 }

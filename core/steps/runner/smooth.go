@@ -15,7 +15,7 @@ func (x *exec) smooth() error {
 	}
 	w := x.intOption("width", 0)
 	if w > len(d.y) {
-		return fmt.Errorf("a width of %d is longer than the series (%s); give a width of at most %d", w, count(len(d.y), "value", "values"), len(d.y))
+		return x.errAtOption("width", "a width of %d is longer than the series (%s); give a width of at most %d", w, count(len(d.y), "value", "values"), len(d.y))
 	}
 	var line []float64
 	var err error

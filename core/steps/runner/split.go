@@ -1,7 +1,6 @@
 package runner
 
 import (
-	"fmt"
 	"strings"
 
 	"quillcast/core/backtest"
@@ -17,10 +16,10 @@ func (x *exec) split() error {
 	if v, ok := x.option("from"); ok {
 		i, ok := d.series.IndexOf(v.Period)
 		if !ok {
-			return fmt.Errorf("%s is not a period of the series, which runs %s (%s); give a period inside it", v.Raw, x.span(0, len(d.y)), d.series.Frequency().Plural())
+			return x.errAtOption("from", "%s is not a period of the series, which runs %s (%s); give a period inside it", v.Raw, x.span(0, len(d.y)), d.series.Frequency().Plural())
 		}
 		if i == 0 {
-			return fmt.Errorf("%s is the first period, which leaves no training period; give a later period", v.Raw)
+			return x.errAtOption("from", "%s is the first period, which leaves no training period; give a later period", v.Raw)
 		}
 		h.Start = i
 	}

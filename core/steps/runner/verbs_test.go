@@ -137,6 +137,45 @@ func TestRunErrorPositions(t *testing.T) {
 	}
 }
 
+var placedErrorTests = []struct {
+	name string
+	body string // the marker § stands where the error must point
+	want string
+}{
+	{"missing file at the subject", "load §nothing.csv", "no file named"},
+	{"period outside the series at the value", "load orders.csv\nsplit from=§2031-05", "not a period of the series"},
+	{"first period at the value", "load orders.csv\nsplit from=§2020-01", "first period"},
+	{"width at the value", "load orders.csv\nsmooth centered width=§999", "longer than the series"},
+	{"fit failure at the verb", "load flat.csv\nsplit last=40\n§forecast holt-winters", "could not be fitted"},
+}
+
+func TestPlacedErrors(t *testing.T) {
+	t.Parallel()
+	for _, tc := range placedErrorTests {
+		t.Run(tc.name, func(t *testing.T) {
+			text, line, col := markerPos("```quill\n" + tc.body + "\n```\n")
+			res := New().Run(t.Context(), sessionOf(text), testData())
+			if len(res.Errors) == 0 {
+				t.Fatalf("%q: no error", tc.body)
+			}
+			e := res.Errors[0]
+			if e.Line != line || e.Column != col || !strings.Contains(e.Msg, tc.want) {
+				t.Errorf("%q: got %v; want line %d, column %d, containing %q", tc.body, e, line, col, tc.want)
+			}
+		})
+	}
+}
+
+// markerPos removes the § marker and returns where it stood (1-based line
+// and column in characters).
+func markerPos(text string) (string, int, int) {
+	i := strings.Index(text, "§")
+	before := text[:i]
+	line := strings.Count(before, "\n") + 1
+	col := len([]rune(before[strings.LastIndex(before, "\n")+1:])) + 1
+	return before + text[i+len("§"):], line, col
+}
+
 // TestDatasetAttached runs on a dataset read beforehand, as the page does
 // after its preview.
 func TestDatasetAttached(t *testing.T) {
