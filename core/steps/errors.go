@@ -14,7 +14,6 @@ var (
 	ErrValue   = errors.New("option value")       // a value of the wrong kind or out of range
 	ErrSubject = errors.New("subject")            // a missing or unknown subject
 	ErrOrder   = errors.New("step order")         // a step that needs an earlier one
-	ErrWaiting = errors.New("waits on a step")    // an earlier step it needs failed
 	ErrRun     = errors.New("step could not run") // the step ran and failed on the data
 )
 
