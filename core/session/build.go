@@ -3,14 +3,19 @@ package session
 import "strings"
 
 // Build writes a new session document from prose and step blocks given in
-// order: each element of blocks is either prose (written as it is, with a
-// blank line after it) or, when its Kind is Steps, a block of step lines
-// written between fences. Data blocks are written with their Name.
-// The result parses back into the same kinds, bodies and names.
+// order: each element of blocks is either prose (its Body written as it
+// is) or, when its Kind is Steps, a block of step lines written between
+// fences. Data blocks are written with their Name. A blank line separates
+// blocks unless the text so far ends with one or the next prose starts
+// with one, so building from the
+// Raw prose and the bodies of a parsed document whose blocks are separated
+// by blank lines gives its text back. The result parses back into the same
+// kinds, bodies and names.
 func Build(blocks []Part) *Document {
 	var b strings.Builder
 	for i, p := range blocks {
-		if i > 0 {
+		startsBlank := p.Kind == Prose && (strings.HasPrefix(p.Body, "\n") || strings.HasPrefix(p.Body, "\r\n"))
+		if i > 0 && !strings.HasSuffix(b.String(), "\n\n") && !startsBlank {
 			b.WriteByte('\n')
 		}
 		switch p.Kind {

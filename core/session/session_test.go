@@ -192,3 +192,19 @@ func BenchmarkParse(b *testing.B) {
 		})
 	}
 }
+
+func TestBuildFromParsed(t *testing.T) {
+	t.Parallel()
+	text := "# Orders\n\nIntro.\n\n```quill\nload a.csv\n```\n\nMiddle.\n\n```quill-data a.csv\nm,u\n```\n\n```quill\nsplit last=3\n```\n\nEnd.\n"
+	d := Parse(text)
+	var blocks []Part
+	for _, p := range d.Parts {
+		if p.Kind == Prose {
+			p.Body = p.Raw
+		}
+		blocks = append(blocks, p)
+	}
+	if got := Build(blocks).String(); got != text {
+		t.Errorf("built %q, want %q", got, text)
+	}
+}
