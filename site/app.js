@@ -3,7 +3,7 @@
 // computed or formatted here: every table, chart and message arrives
 // finished from the engine.
 
-import { start, call, EngineError } from "./engine.js";
+import { start, call, stop, mode, onBusy, EngineError } from "./engine.js";
 import { el } from "./dom.js";
 import { Notebook } from "./notebook.js";
 import { showHelp } from "./help.js";
@@ -37,9 +37,9 @@ function explain(err) {
 
 const notebook = new Notebook($("parts"), {
   onChange: (parts) => runAndSave(parts),
-  complete: (line, col) => {
+  complete: async (line, col) => {
     try {
-      return JSON.parse(globalThis.quillcast.complete(line, col)).value || [];
+      return (await call("complete", line, col)) || [];
     } catch {
       return [];
     }
@@ -56,7 +56,7 @@ async function run(parts) {
   session.parts = res.parts;
   notebook.show(res.parts, res.result.outputs);
   const n = res.result.errors ? res.result.errors.length : 0;
-  setStatus(n === 0 ? "All steps ran. Everything stays on this computer." : `${n} step${n === 1 ? " has a" : "s have"} a problem; see the marked lines.`, n > 0);
+  setStatus(n === 0 ? "All steps ran. Everything stays on this computer." : `${n} step${n === 1 ? " has a problem" : "s have problems"}; see the marked lines.`, n > 0);
   return res;
 }
 
@@ -65,8 +65,19 @@ async function runAndSave(parts) {
     const res = await run(parts);
     if (res) scheduleSave();
   } catch (err) {
+    if (err instanceof EngineError && err.failure.code === "stopped") {
+      // Keep the edit: save the text even though its outputs were not made.
+      session.parts = parts;
+      setStatus("Stopped. Your steps are kept; edit a step or press Run all steps to run them again.", true);
+      return;
+    }
     setStatus(`Could not run the steps: ${explain(err)}`, true);
   }
+}
+
+/** stopRun ends a long run; a fresh engine comes up with the stored data. */
+async function stopRun() {
+  await stop();
 }
 
 /** scheduleSave saves the session within a second of the last edit. */
@@ -176,6 +187,9 @@ function fileName(title, ext) {
 function wire() {
   $("doc-title").addEventListener("change", () => { session.title = $("doc-title").value; scheduleSave(); });
   $("add-step").addEventListener("click", () => notebook.addStep());
+  $("run-all").addEventListener("click", () => runAndSave(notebook.parts));
+  $("stop").addEventListener("click", () => stopRun().catch((e) => setStatus(explain(e), true)));
+  onBusy((busy) => { $("busy").hidden = !busy; });
   $("add-note").addEventListener("click", () => notebook.addNote());
   $("new-session").addEventListener("click", () => newSession("Untitled session", "```quill\n```\n").catch((e) => setStatus(explain(e), true)));
   $("copy-session").addEventListener("click", async () => {
@@ -271,7 +285,7 @@ function wire() {
     history.replaceState(null, "", location.pathname);
     openShared(shared).catch((e) => setStatus(explain(e), true));
   });
-  document.addEventListener("quillcast-storage-closed", () => banner("Quillcast was updated in another tab. Reload this page to keep saving."));
+  window.addEventListener("quillcast-storage-closed", () => banner("Quillcast was updated in another tab. Reload this page to keep saving."));
 }
 
 async function afterAttach() {
@@ -290,6 +304,7 @@ async function main() {
   wire();
   try {
     const [, demo] = await Promise.all([start(engineResponse()), loadDemo()]);
+    root.dataset.engine = mode();
     const store = await call("storage");
     $("storage-note").textContent = store.kind === "IndexedDB"
       ? "Sessions and datasets are kept in this browser's storage on this computer."
@@ -311,6 +326,9 @@ async function main() {
       for (const f of demo.files) await call("attach", f.bytes, f.name);
       await listDatasets();
       await newSession("Demo: Wickery candle orders", demo.text || "```quill\n```\n");
+    }
+    if (mode() === "page") {
+      setStatus("The engine runs on the page itself here (no worker could start): a long run pauses the page until it ends.");
     }
     root.dataset.state = "ready";
   } catch (err) {

@@ -1,6 +1,11 @@
-// Starting the WebAssembly engine and calling it. The engine registers
-// globalThis.quillcast and signals "quillcast-ready"; every call answers
-// with JSON text {"ok":true,"value":...} or {"ok":false,"error":{...}}.
+// Starting the WebAssembly engine and calling it. The engine runs in a Web
+// Worker when the browser allows one (so long runs can show progress and be
+// stopped); otherwise it runs on the page itself, and the page says so.
+// Either way globalThis.quillcast holds the engine's functions, each
+// answering (at once or through a Promise) with JSON text
+// {"ok":true,"value":...} or {"ok":false,"error":{...}}.
+
+import { isBundle, assetText } from "./assets.js";
 
 /** EngineError carries the engine's error data: message, line, column. */
 export class EngineError extends Error {
@@ -11,30 +16,178 @@ export class EngineError extends Error {
   }
 }
 
-/** Knowing the engine API generation this page was written for. */
+/** The engine API generation this page was written for. */
 const engineVersion = "1";
 
-/**
- * start loads quillcast.wasm (fetched as a Response or a Promise of one)
- * and resolves once the engine has signalled that it is ready.
- */
-export async function start(wasmResponse) {
-  const ready = new Promise((resolve) => {
-    if (globalThis.quillcast && globalThis.quillcast.ready) {
-      resolve();
-    } else {
-      globalThis.addEventListener("quillcast-ready", () => resolve(), { once: true });
-    }
+/** How long a call runs before the page shows the progress bar. */
+const busyAfterMs = 250;
+
+const engine = {
+  mode: "",        // "worker" or "page"
+  worker: null,
+  wasm: null,      // the engine's bytes, kept to restart a stopped worker
+  pending: new Map(), // call id -> {resolve, reject, name}
+  nextId: 1,
+  busyTimer: 0,
+  onBusy: () => {},
+  restarting: null, // a Promise while a stopped worker is replaced
+  source: null,     // the worker's code as a Blob
+};
+
+/** onBusy registers fn(busy) to show and hide the progress bar. */
+export function onBusy(fn) {
+  engine.onBusy = fn;
+}
+
+/** mode returns "worker" or "page": where the engine runs. */
+export function mode() {
+  return engine.mode;
+}
+
+function waitReady() {
+  return new Promise((resolve) => {
+    if (globalThis.quillcast && globalThis.quillcast.ready) resolve();
+    else globalThis.addEventListener("quillcast-ready", () => resolve(), { once: true });
   });
+}
+
+/** startInPage runs the engine on the page's own thread. */
+async function startInPage(wasm) {
+  const ready = waitReady();
   const go = new globalThis.Go();
-  const { instance } = await WebAssembly.instantiateStreaming(wasmResponse, go.importObject);
-  go.run(instance).then(() => {
-    document.dispatchEvent(new CustomEvent("quillcast-stopped"));
-  });
+  const { instance } = await WebAssembly.instantiate(wasm, go.importObject);
+  go.run(instance).then(() => document.dispatchEvent(new CustomEvent("quillcast-stopped")));
   await ready;
+  engine.mode = "page";
+}
+
+/**
+ * workerSource reads the worker's code once, at start: Go's wasm_exec.js
+ * followed by worker.js. Workers are made from it as Blobs, so replacing a
+ * stopped worker fetches nothing.
+ */
+async function workerSource() {
+  if (!engine.source) {
+    const runtime = isBundle()
+      ? document.querySelector("script:not([src]):not([type])").textContent
+      : await assetText("wasm_exec.js");
+    const code = await assetText("worker.js");
+    if (!runtime || !code) throw new Error("the worker's code is missing");
+    engine.source = new Blob([runtime, "\n", code], { type: "text/javascript" });
+  }
+  return engine.source;
+}
+
+/** makeWorker creates a worker from its code. */
+async function makeWorker() {
+  const url = URL.createObjectURL(await workerSource());
+  try {
+    return new Worker(url);
+  } finally {
+    setTimeout(() => URL.revokeObjectURL(url), 10000);
+  }
+}
+
+/** startWorker starts the engine in a worker and installs the proxy. */
+async function startWorker(wasm) {
+  const w = await makeWorker();
+  const info = await new Promise((resolve, reject) => {
+    w.onerror = (e) => reject(new Error(e.message || "the worker could not start"));
+    w.onmessage = (e) => {
+      const m = e.data;
+      if (m.type === "ready") resolve(m);
+      else if (m.type === "failed") reject(new Error(m.message));
+    };
+    w.postMessage({ type: "start", wasm }, [wasm]);
+  });
+  w.onerror = null;
+  w.onmessage = (e) => received(e.data);
+  engine.worker = w;
+  engine.mode = "worker";
+  const api = { ready: true, version: info.version };
+  for (const name of info.names) api[name] = (...args) => request(name, args);
+  globalThis.quillcast = api;
+}
+
+function received(m) {
+  if (m.type === "reply") {
+    const p = engine.pending.get(m.id);
+    if (!p) return;
+    engine.pending.delete(m.id);
+    p.resolve(m.text);
+    busyCheck();
+  } else if (m.type === "storage-closed") {
+    globalThis.dispatchEvent(new CustomEvent("quillcast-storage-closed"));
+  } else if (m.type === "stopped") {
+    document.dispatchEvent(new CustomEvent("quillcast-stopped"));
+  }
+}
+
+async function request(name, args) {
+  if (engine.restarting) await engine.restarting;
+  return post(name, args);
+}
+
+/** post sends a call to the worker and returns the Promise of its answer. */
+function post(name, args) {
+  const id = engine.nextId++;
+  return new Promise((resolve, reject) => {
+    engine.pending.set(id, { resolve, reject, name });
+    engine.worker.postMessage({ type: "call", id, name, args });
+    busyCheck();
+  });
+}
+
+/** busyCheck shows the progress bar while a call has run for a while. */
+function busyCheck() {
+  clearTimeout(engine.busyTimer);
+  if (engine.pending.size === 0) {
+    engine.onBusy(false);
+    return;
+  }
+  engine.busyTimer = setTimeout(() => engine.onBusy(engine.pending.size > 0), busyAfterMs);
+}
+
+/**
+ * start loads the engine (a Response or a Promise of one) and resolves
+ * once it is ready: in a worker where possible, on the page otherwise.
+ */
+export async function start(response) {
+  const [bytes] = await Promise.all([(await response).arrayBuffer(), workerSource().catch(() => null)]);
+  engine.wasm = bytes.slice(0);
+  try {
+    await startWorker(bytes.slice(0));
+  } catch (err) {
+    console.warn(`quillcast: the engine runs on the page itself, because no worker could start (${err.message})`);
+    await startInPage(bytes);
+  }
   if (globalThis.quillcast.version !== engineVersion) {
     throw new Error(`this page needs engine version ${engineVersion}, but version ${globalThis.quillcast.version} was loaded; reload the page`);
   }
+}
+
+/**
+ * stop ends a long run by ending the worker, then starts a fresh one that
+ * reloads the stored datasets. Calls in flight fail with an EngineError of
+ * code "stopped"; later calls wait for the fresh engine. Stored sessions and
+ * datasets are untouched.
+ */
+export async function stop() {
+  if (engine.mode !== "worker") return false;
+  engine.worker.terminate();
+  for (const p of engine.pending.values()) {
+    p.reject(new EngineError({ message: "the run was stopped", code: "stopped" }));
+  }
+  engine.pending.clear();
+  busyCheck();
+  // The fresh engine reloads the stored datasets before any other call.
+  engine.restarting = startWorker(engine.wasm.slice(0)).then(() => post("storage", []));
+  try {
+    await engine.restarting;
+  } finally {
+    engine.restarting = null;
+  }
+  return true;
 }
 
 /** call runs an engine function and returns its value or throws EngineError. */

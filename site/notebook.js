@@ -10,7 +10,7 @@ export class Notebook {
   constructor(root, { onChange, complete }) {
     this.root = root;
     this.onChange = onChange; // called with new parts after every edit
-    this.complete = complete; // (line, column) => suggestions
+    this.complete = complete; // async (line, column) => suggestions
     this.parts = [];
     this.outputs = new Map(); // document line -> output
     this.undo = [];
@@ -201,9 +201,11 @@ export class Notebook {
       else if (changed) this.change(parts, { part: i, line: j });
       else { this.render(); this.focusPlace(i, j, false); }
     };
-    const suggest = () => {
+    const suggest = async () => {
       const col = Array.from(input.value.slice(0, input.selectionStart)).length + 1;
-      const items = this.complete(input.value, col) || [];
+      const asked = input.value;
+      const items = (await this.complete(asked, col)) || [];
+      if (input.value !== asked || !input.isConnected) return;
       list.replaceChildren(...items.slice(0, 8).map((s, k) => el("li", { role: "option", "aria-selected": k === 0 ? "true" : "false" },
         el("code", {}, s.label), " ", el("span", { class: "detail" }, s.detail))));
       list.items = items;

@@ -15,6 +15,9 @@ func TestDemoPage(t *testing.T) {
 	if !eval[bool](p, `globalThis.quillcast && globalThis.quillcast.ready === true`) {
 		t.Error("the engine's ready flag is not set")
 	}
+	if mode := eval[string](p, `document.documentElement.dataset.engine`); mode != "worker" {
+		t.Errorf("the engine runs in %q, want a worker", mode)
+	}
 	checks := []struct {
 		name string
 		expr string

@@ -179,3 +179,19 @@ func TestAnotherTabsSave(t *testing.T) {
 	a.checkClean(readyA)
 	b.checkClean(readyB)
 }
+
+// TestStopRun stops a run under way: the page says so, keeps the steps, and
+// the fresh engine runs them again on request.
+func TestStopRun(t *testing.T) {
+	p := openSite(t)
+	ready := p.open("")
+	eval[bool](p, `(() => { document.getElementById('run-all').click(); document.getElementById('stop').click(); return true; })()`)
+	waitFor(p, "the stopped message", `document.getElementById('status').textContent.startsWith('Stopped')`)
+	waitFor(p, "the fresh engine", `globalThis.quillcast && globalThis.quillcast.ready === true`)
+	p.run("running again", 10*time.Second, chromedp.Click(chromedp.CSS("#run-all")))
+	waitFor(p, "the steps to run again", `document.getElementById('status').textContent.startsWith('All steps ran')`)
+	if n := eval[int](p, `document.querySelectorAll('#parts svg.qc').length`); n == 0 {
+		t.Error("after the restart no chart is drawn")
+	}
+	p.checkClean(ready)
+}

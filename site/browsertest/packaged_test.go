@@ -42,5 +42,6 @@ func TestBundle(t *testing.T) {
 	ready := p.open("")
 	p.screenshot("bundle-from-disk")
 	checkDemo(t, p)
+	t.Logf("engine runs in %q; storage: %q", eval[string](p, `document.documentElement.dataset.engine`), eval[string](p, `document.getElementById('storage-note').textContent`))
 	p.checkClean(ready)
 }

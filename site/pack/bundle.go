@@ -43,12 +43,12 @@ func bundlePolicy(scripts, styles []string) string {
 		"form-action 'none'"
 }
 
-// embeddedFiles returns the data block's JSON: the demo files and the
+// embeddedFiles returns the data block's JSON: the demo files, the worker and the
 // gzip-compressed engine, base64-encoded, by name.
 func embeddedFiles(files siteFiles) (string, error) {
 	out := map[string]string{}
 	for _, name := range slices.Sorted(maps.Keys(files)) {
-		if strings.HasPrefix(name, "demo/") {
+		if strings.HasPrefix(name, "demo/") || name == "worker.js" {
 			out[name] = base64.StdEncoding.EncodeToString(files[name])
 		}
 	}

@@ -1,0 +1,50 @@
+// The engine's worker: runs the WebAssembly engine off the page's main
+// thread so that long runs (sweeps, backtests, bake-offs) leave the page
+// responsive, and so that a run can be stopped by ending the worker.
+//
+// Messages in:  {type: "start", wasm: ArrayBuffer}
+//               {type: "call", id, name, args}
+// Messages out: {type: "ready", version, names}, {type: "reply", id, text},
+//               {type: "failed", message}, {type: "stopped"},
+//               {type: "storage-closed"}
+//
+// The page starts it from a Blob holding wasm_exec.js followed by this
+// text, so Go is already defined and no file is fetched; loaded on its own,
+// it fetches wasm_exec.js from beside itself.
+
+/* global Go, importScripts */
+if (typeof Go === "undefined") {
+  importScripts("wasm_exec.js");
+}
+
+async function startEngine(wasm) {
+  const ready = new Promise((resolve) => self.addEventListener("quillcast-ready", resolve, { once: true }));
+  const go = new Go();
+  const { instance } = await WebAssembly.instantiate(wasm, go.importObject);
+  go.run(instance).then(() => self.postMessage({ type: "stopped" }));
+  await ready;
+  const api = self.quillcast;
+  const names = Object.keys(api).filter((k) => typeof api[k] === "function");
+  self.postMessage({ type: "ready", version: api.version, names });
+}
+
+async function answer(m) {
+  let text;
+  try {
+    text = await self.quillcast[m.name](...m.args);
+  } catch (err) {
+    text = JSON.stringify({ ok: false, error: { message: `the engine could not answer (${err && err.message ? err.message : err})` } });
+  }
+  self.postMessage({ type: "reply", id: m.id, text });
+}
+
+self.addEventListener("quillcast-storage-closed", () => self.postMessage({ type: "storage-closed" }));
+
+self.onmessage = (e) => {
+  const m = e.data;
+  if (m.type === "start") {
+    startEngine(m.wasm).catch((err) => self.postMessage({ type: "failed", message: String(err && err.message ? err.message : err) }));
+  } else if (m.type === "call") {
+    answer(m);
+  }
+};
