@@ -3,6 +3,7 @@ package runner
 import (
 	"fmt"
 	"math"
+	"slices"
 
 	"quillcast/core/accuracy"
 	"quillcast/core/chart"
@@ -10,8 +11,7 @@ import (
 	"quillcast/core/format"
 )
 
-// tableMeasures are the validation measures every comparison shows.
-
+// tableMeasures returns the validation measures every comparison shows.
 func tableMeasures() []accuracy.Measure {
 	return []accuracy.Measure{accuracy.ME, accuracy.MAE, accuracy.RMSE, accuracy.MAPE, accuracy.MASE}
 }
@@ -118,7 +118,7 @@ func (x *exec) missingLabels() []string {
 			out = append(out, k[6:])
 		}
 	}
-	sortStrings(out)
+	slices.Sort(out)
 	return out
 }
 

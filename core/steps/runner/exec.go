@@ -4,7 +4,6 @@ import (
 	"context"
 	"fmt"
 	"math"
-	"slices"
 	"strings"
 
 	"quillcast/core/format"
@@ -208,5 +207,3 @@ func nanSlice(n int) []float64 {
 	}
 	return out
 }
-
-func sortStrings(s []string) { slices.Sort(s) }
