@@ -16,7 +16,9 @@ ADDR      ?= 127.0.0.1
 PORT      ?= 8080
 FUZZTIME  ?= 30s
 BENCHTIME ?= 1s
-DATA      ?= testdata/demo
+# DATA is the data for `make bakeoff` (a competition-layout file) or `make
+# memo` (comma-separated data files); each target has its own default.
+DATA      ?=
 FORECASTS ?= $(BUILD)/bakeoff/forecasts.csv
 SESSION   ?= testdata/sessions/demo.md
 OUT       ?= $(BUILD)/memo
@@ -75,11 +77,11 @@ sizes: build
 
 ## bakeoff: run the bake-off over DATA and write FORECASTS
 bakeoff:
-	$(GO) run ./core/cmd/bakeoff -data $(DATA) -forecasts $(FORECASTS)
+	$(GO) run ./core/cmd/bakeoff -data $(or $(DATA),../shared/competition/m3-quarterly.csv) -forecasts $(FORECASTS)
 
 ## memo: run SESSION on DATA and write the memo to OUT
 memo:
-	$(GO) run ./core/cmd/memo -session $(SESSION) -data $(DATA) -out $(OUT)
+	$(GO) run ./core/cmd/memo -session $(SESSION) -data $(or $(DATA),testdata/demo/wickery-monthly-orders.csv) -out $(OUT)
 
 ## fuzz: run every fuzz target for FUZZTIME each
 fuzz:
