@@ -58,11 +58,11 @@ func TestCompleteAgreesWithParser(t *testing.T) {
 	for _, v := range Verbs() {
 		for _, o := range v.Options {
 			line := v.Example
-			if _, given := parseLine(line, DefaultCatalog()).Option(o.Name); given {
+			if _, given := parseLine(line, newLang(DefaultCatalog())).Option(o.Name); given {
 				continue
 			}
 			line += " " + o.Name + "=" + o.Example
-			if s := parseLine(line, DefaultCatalog()); s.Err != nil && s.Err.Cause != ErrOption {
+			if s := parseLine(line, newLang(DefaultCatalog())); s.Err != nil && s.Err.Cause != ErrOption {
 				t.Errorf("%s: %q: %v", v.Name, line, s.Err)
 			}
 		}
@@ -89,7 +89,7 @@ func TestHelp(t *testing.T) {
 			}
 		}
 		// Each verb's example is a valid step in the help's own words.
-		if s := parseLine(v.Example, DefaultCatalog()); s.Err != nil {
+		if s := parseLine(v.Example, newLang(DefaultCatalog())); s.Err != nil {
 			t.Errorf("example of %s does not parse: %v", v.Name, s.Err)
 		}
 	}

@@ -28,10 +28,10 @@ func Label(s *Step) string {
 // checkOrder reports steps that need something no earlier step made:
 // data before anything else, a split before scoring, a forecast label
 // before it is named. Steps with an error already keep it.
-func checkOrder(steps []*Step, cat Catalog) {
+func checkOrder(steps []*Step, lg *lang) {
 	sc := scope{labels: map[string]int{}}
 	for _, s := range steps {
-		def, ok := Lookup(s.Verb)
+		def, ok := lg.verbs[s.Verb]
 		if !ok {
 			continue
 		}

@@ -25,11 +25,12 @@ func ParseText(text string) *Program { return Parse(session.Parse(text)) }
 // ParseWith is [Parse] with a catalogue of methods of the caller's choice.
 func ParseWith(doc *session.Document, cat Catalog) *Program {
 	p := &Program{}
+	lg := newLang(cat)
 	for _, l := range doc.StepLines() {
 		if isBlank(l.Text) {
 			continue
 		}
-		s := parseLine(l.Text, cat)
+		s := parseLine(l.Text, lg)
 		s.N = len(p.Steps) + 1
 		s.Line = l.Line
 		if s.Err != nil {
@@ -37,7 +38,7 @@ func ParseWith(doc *session.Document, cat Catalog) *Program {
 		}
 		p.Steps = append(p.Steps, s)
 	}
-	checkOrder(p.Steps, cat)
+	checkOrder(p.Steps, lg)
 	for _, s := range p.Steps {
 		if s.Err != nil {
 			p.Errors = append(p.Errors, s.Err)
@@ -70,7 +71,8 @@ func errAt(col int, cause error, msg string) *Error {
 
 // parseLine reads one step line; problems land in the step's Err with the
 // column set and Step and Line left for the caller.
-func parseLine(line string, cat Catalog) *Step {
+func parseLine(line string, lg *lang) *Step {
+	cat := lg.cat
 	s := &Step{Text: line}
 	toks, comment, lerr := lex(line)
 	s.Comment = comment
@@ -85,12 +87,12 @@ func parseLine(line string, cat Catalog) *Step {
 	verb := toks[0]
 	s.Verb, s.Column = verb.raw, verb.col
 	if verb.eq >= 0 || verb.quoted {
-		s.Err = errAt(verb.col, ErrSyntax, "a step starts with a verb, but found "+quote(verb.raw)+"; begin the line with a verb such as "+strings.Join(verbNames()[:4], ", "))
+		s.Err = errAt(verb.col, ErrSyntax, "a step starts with a verb, but found "+quote(verb.raw)+"; begin the line with a verb such as "+strings.Join(lg.names[:4], ", "))
 		return s
 	}
-	def, ok := Lookup(verb.raw)
+	def, ok := lg.verbs[verb.raw]
 	if !ok {
-		hint := didYouMean(strings.ToLower(verb.raw), verbNames())
+		hint := didYouMean(strings.ToLower(verb.raw), lg.names)
 		if hint == "" {
 			hint = verbList()
 		}
@@ -146,6 +148,22 @@ func parseLine(line string, cat Catalog) *Step {
 		s.Err = errAt(col, ErrOption, msg)
 	}
 	return s
+}
+
+// lang is the language's definitions, built once per parse.
+type lang struct {
+	cat   Catalog
+	verbs map[string]VerbDef
+	names []string
+}
+
+func newLang(cat Catalog) *lang {
+	lg := &lang{cat: cat, verbs: map[string]VerbDef{}}
+	for _, v := range Verbs() {
+		lg.verbs[v.Name] = v
+		lg.names = append(lg.names, v.Name)
+	}
+	return lg
 }
 
 // StepOptions returns every option a step of verb def with the given

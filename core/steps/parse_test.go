@@ -217,7 +217,7 @@ func FuzzParse(f *testing.F) {
 			if s.Err != nil {
 				continue
 			}
-			again := parseLine(s.Canonical(), DefaultCatalog())
+			again := parseLine(s.Canonical(), newLang(DefaultCatalog()))
 			if again.Err != nil || again.Canonical() != s.Canonical() {
 				t.Fatalf("canonical %q of %q reads back as %q (%v)", s.Canonical(), s.Text, again.Canonical(), again.Err)
 			}
