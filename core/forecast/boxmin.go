@@ -5,11 +5,35 @@ import "math"
 // boxMin is a small projected quasi-Newton minimiser for a few variables
 // inside a box lo <= x <= hi, used to estimate smoothing constants.
 //
-// Why not gonum/optimize: it has no bounded method (a transform to an
-// unbounded space never reaches a bound where smoothing constants often
-// belong), and importing it pulls in gonum's stat/distmv and with it a
-// module this project does not depend on. The problems here have at most
-// four variables, so a plain loop is short and fast.
+// Why not gonum/optimize, decided by measurement (boxmin_compare_test.go,
+// measured on a 2-core machine shared with other work, medians of the
+// paired benchmark BenchmarkOptimizerPaired, where every iteration runs
+// all three minimisers in rotating order so they meet the same load):
+// additive Holt-Winters, season 12, 144 seeded monthly points, alpha,
+// beta and gamma open, the same exact gradient and the same two grid
+// starts; gonum's LBFGS and BFGS work on a logistic transform of the box.
+//
+//	                      evaluations  native     js/wasm (Node 20)
+//	boxmin (local runs)   36           129 µs     417 µs
+//	gonum LBFGS           21           197 µs     492 µs
+//	gonum BFGS            20           196 µs     541 µs
+//	one SSE+gradient pass              3.3 µs     10.2 µs
+//
+// All three reach the same SSE (1592.894079 to ten digits; 162, 147 and
+// 146 evaluations for the whole fit with its 125-point grid), and
+// TestBoxMinAgainstGonum holds boxmin within a relative 1e-6 of both on
+// every reference fitted case. gonum needs fewer evaluations but spends
+// about 6 µs natively and 13 µs in wasm on each one beyond the model
+// itself (Minimize hands every evaluation between goroutines), more than
+// the 3 to 10 µs the model costs, so boxmin is 1.5 times faster natively
+// and 1.2 times in wasm. Size: importing gonum/optimize (it brings
+// stat/distmv, spatial/r1 and golang.org/x/tools/container/intsets) adds
+// 187,168 bytes raw, 50,703 gzip -9 and 35,522 brotli to a js/wasm main
+// that already uses this package (257 KB, 68 KB and 52 KB to an empty
+// one), against a payload target of 1.4 MB gzip that the engine nearly
+// fills. A logistic transform also never reaches a bound, where smoothing
+// constants often belong. The problems have at most four variables (plus
+// the initial states with start=estimated), so a plain loop is short.
 //
 // Method: the projected BFGS method with an active set. Variables at a
 // bound whose gradient pushes outwards are held; the others move along

@@ -17,6 +17,47 @@ type fittedBox struct {
 // our SSE is lower. Expected values: the box-region minima of the case
 // files (statsmodels 0.13.5 SSE minimised with scipy L-BFGS-B from a grid).
 func TestSmoothingEstimated(t *testing.T) {
+	for _, tt := range referenceFits(t) {
+		t.Run(tt.name, func(t *testing.T) {
+			if tt.want.SSE <= 0 || tt.want.Alpha == nil {
+				t.Fatal("case block missing")
+			}
+			f := mustFit(t, tt.m, tt.y, tt.season)
+			sse := sumSquares(f.Residuals())
+			t.Logf("SSE %.6g (reference %.6g), %d evaluations, converged %v, params %v", sse, tt.want.SSE, f.Evaluations, f.Converged, f.Params)
+			if sse > tt.want.SSE*1.001 {
+				t.Errorf("SSE %.8g exceeds the reference minimum %.8g by more than 0.1%%", sse, tt.want.SSE)
+			}
+			if !f.Converged {
+				t.Errorf("not converged")
+			}
+			if sse >= tt.want.SSE {
+				want := map[string]*float64{"alpha": tt.want.Alpha, "beta": tt.want.Beta, "gamma": tt.want.Gamma, "phi": tt.want.Phi}
+				for _, p := range f.Params {
+					if w := want[p.Name]; w != nil && !within(p.Value, *w, 0.02, 0) {
+						t.Errorf("%s = %.5f, want %.5f within 0.02", p.Name, p.Value, *w)
+					}
+				}
+			}
+		})
+	}
+}
+
+// refFit is one reference fitted case: a smoothing form with its initial
+// states held at the reference values, and the reference minimum.
+type refFit struct {
+	name   string
+	y      []float64
+	season int
+	m      Smoothing
+	want   fittedBox
+}
+
+// referenceFits reads the fitted cases of the reference folder (case files
+// ses_fitted_nile, ses_fitted_nist_sales, holt_fitted_nist_sales,
+// hw_fitted_nist_sales and hw_fitted_elec; statsmodels 0.13.5).
+func referenceFits(t *testing.T) []refFit {
+	t.Helper()
 	type states struct {
 		Level    float64   `json:"initial_level"`
 		Trend    float64   `json:"initial_trend"`
@@ -64,13 +105,7 @@ func TestSmoothingEstimated(t *testing.T) {
 		}
 		return Smoothing{Trend: true, Season: kind, Level0: ptr(st.Level), Trend0: ptr(st.Trend), Season0: st.Seasonal}, box
 	}
-	tests := []struct {
-		name   string
-		y      []float64
-		season int
-		m      Smoothing
-		want   fittedBox
-	}{
+	tests := []refFit{
 		{"ses nile", sesNile.Data.Y, 0, Smoothing{Level0: ptr(sesNile.Expected.Fixed.Level)}, sesNile.Expected.Fixed.fittedBox},
 		{"ses nist sales", sesSales.Data.Y, 0, Smoothing{Level0: ptr(sesSales.Expected.Fixed.Level)}, sesSales.Expected.Fixed.fittedBox},
 		{"holt nist sales", holt.Data.Y, 0, Smoothing{Trend: true, Level0: ptr(holt.Params.Level), Trend0: ptr(holt.Params.Trend)}, holt.Expected.Holt.Box},
@@ -83,37 +118,8 @@ func TestSmoothingEstimated(t *testing.T) {
 	}{{"nist sales", hwSales, 4}, {"elec", hwElec, 12}} {
 		for _, kind := range []SeasonKind{Additive, Multiplicative} {
 			m, box := hw(c.c, kind)
-			tests = append(tests, struct {
-				name   string
-				y      []float64
-				season int
-				m      Smoothing
-				want   fittedBox
-			}{"holt-winters " + kind.String() + " " + c.name, c.c.Data.Y, c.m, m, box})
+			tests = append(tests, refFit{"holt-winters " + kind.String() + " " + c.name, c.c.Data.Y, c.m, m, box})
 		}
 	}
-	for _, tt := range tests {
-		t.Run(tt.name, func(t *testing.T) {
-			if tt.want.SSE <= 0 || tt.want.Alpha == nil {
-				t.Fatal("case block missing")
-			}
-			f := mustFit(t, tt.m, tt.y, tt.season)
-			sse := sumSquares(f.Residuals())
-			t.Logf("SSE %.6g (reference %.6g), %d evaluations, converged %v, params %v", sse, tt.want.SSE, f.Evaluations, f.Converged, f.Params)
-			if sse > tt.want.SSE*1.001 {
-				t.Errorf("SSE %.8g exceeds the reference minimum %.8g by more than 0.1%%", sse, tt.want.SSE)
-			}
-			if !f.Converged {
-				t.Errorf("not converged")
-			}
-			if sse >= tt.want.SSE {
-				want := map[string]*float64{"alpha": tt.want.Alpha, "beta": tt.want.Beta, "gamma": tt.want.Gamma, "phi": tt.want.Phi}
-				for _, p := range f.Params {
-					if w := want[p.Name]; w != nil && !within(p.Value, *w, 0.02, 0) {
-						t.Errorf("%s = %.5f, want %.5f within 0.02", p.Name, p.Value, *w)
-					}
-				}
-			}
-		})
-	}
+	return tests
 }
