@@ -4,9 +4,9 @@ import (
 	"fmt"
 )
 
-// maxSpan returns the most periods one series of a file with rows data
-// rows may span: 100,000 plus 100 per row, at most twenty million. Far
-// beyond any business series, it keeps a mistyped date from filling
+// maxSpan returns the most periods the series of a file with rows data
+// rows may hold together: 100,000 plus 100 per row, at most twenty million.
+// Far beyond any business data, it keeps a mistyped date from filling
 // memory with missing periods.
 func maxSpan(rows int) int {
 	return min(20_000_000, 100_000+100*rows)
@@ -130,8 +130,13 @@ func (r *reader) groupRows(key int) ([]string, [][]int32) {
 	return keys, groups
 }
 
-// spanError reports periods spread too far for one series.
+// spanError reports periods spread too far for the rows read.
 func (r *reader) spanError(name string, lo, hi Period) {
-	r.fail(-1, -1, "", ErrSpan, fmt.Sprintf("series %q runs from %s to %s, %d %s for %d rows of data; check the first and last dates, or set a coarser frequency",
-		name, lo, hi, hi.Sub(lo)+1, lo.Freq.Plural(), len(r.rows)))
+	msg := fmt.Sprintf("series %q runs from %s to %s, %d %s for %d rows of data; check the first and last dates, or set a coarser frequency",
+		name, lo, hi, hi.Sub(lo)+1, lo.Freq.Plural(), len(r.rows))
+	if r.slots > 0 {
+		msg = fmt.Sprintf("series %q runs from %s to %s, and with the series before it that makes %d %s for %d rows of data; check the first and last dates, or set a coarser frequency",
+			name, lo, hi, r.slots+hi.Sub(lo)+1, lo.Freq.Plural(), len(r.rows))
+	}
+	r.fail(-1, -1, "", ErrSpan, msg)
 }

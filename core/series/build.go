@@ -59,11 +59,12 @@ func (b *builder) build(labelCols []int) (*Series, []Label) {
 		r.decide("series %q has no values and is left out", b.name)
 		return nil, nil
 	}
-	if hi-lo >= maxSpan(len(r.rows)) {
+	n := hi - lo + 1
+	if r.slots+n > maxSpan(len(r.rows)) {
 		r.spanError(b.name, Period{b.freq, lo}, Period{b.freq, hi})
 		return nil, nil
 	}
-	n := hi - lo + 1
+	r.slots += n
 	b.s = &Series{Name: b.name, Start: Period{b.freq, lo}, Values: make([]float64, n), Season: b.freq.DefaultSeason()}
 	for i := range b.s.Values {
 		b.s.Values[i] = math.NaN()

@@ -19,6 +19,7 @@ type reader struct {
 	decimal  byte   // decimal mark decided for an earlier column; 0 when none
 	decCol   string // the column that decided it
 	delim    byte   // the cell separator; 0 for one column
+	slots    int    // periods held by the series built so far
 }
 
 // Read reads a delimited text file (CSV, TSV and the like) into regular

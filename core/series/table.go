@@ -56,9 +56,12 @@ func split(data []byte, delim byte) (*table, error) {
 		}
 		perRow += bytes.Count(data[:end], []byte{delim})
 	}
+	// Every cell but the first of a row ends a delimiter, so a file holds
+	// at most one cell per byte and line: a long first line must not
+	// reserve room for that many cells on every line.
 	t := &table{
 		data:  data,
-		cells: make([]span, 0, lines*perRow),
+		cells: make([]span, 0, min(lines*perRow, len(data)+lines)),
 		first: make([]int32, 0, lines+1),
 		line:  make([]int32, 0, lines),
 	}
