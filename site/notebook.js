@@ -108,7 +108,7 @@ export class Notebook {
 
   stepsBlock(p, i) {
     const block = el("div", { class: "steps", "data-part": i });
-    p.lines.forEach((line, j) => block.append(this.stepRow(line, i, j)));
+    (p.lines || []).forEach((line, j) => block.append(this.stepRow(line, i, j)));
     return block;
   }
 

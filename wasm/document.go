@@ -13,10 +13,10 @@ import (
 // pagePart is one stretch of a session as the page edits it: prose (its
 // markdown), a block of step lines, or a block of embedded data.
 type pagePart struct {
-	Kind  string     `json:"kind"`            // "prose", "steps" or "data"
-	Text  string     `json:"text,omitempty"`  // prose markdown, or the data block's body
-	Name  string     `json:"name,omitempty"`  // file name of a data block
-	Lines []pageLine `json:"lines,omitempty"` // step lines of a steps block
+	Kind  string     `json:"kind"`           // "prose", "steps" or "data"
+	Text  string     `json:"text,omitempty"` // prose markdown, or the data block's body
+	Name  string     `json:"name,omitempty"` // file name of a data block
+	Lines []pageLine `json:"lines"`          // step lines of a steps block; null for other parts
 }
 
 // pageLine is one step line and its 1-based line in the whole document, by

@@ -195,3 +195,21 @@ func TestStopRun(t *testing.T) {
 	}
 	p.checkClean(ready)
 }
+
+// TestForgetAllLocalData removes every session and dataset after the
+// confirmation, and a reload finds none of them.
+func TestForgetAllLocalData(t *testing.T) {
+	p := openSite(t)
+	ready := p.open("")
+	p.run("asking to forget", 10*time.Second, chromedp.Click(chromedp.CSS("#forget")))
+	waitFor(p, "the confirmation", `document.getElementById('forget-dialog').open`)
+	p.run("confirming", 10*time.Second, chromedp.Click(chromedp.CSS(`#forget-dialog button[value="forget"]`)))
+	waitFor(p, "the page to forget", `document.getElementById('status').textContent.startsWith('Every session and dataset was removed')`)
+	if n := eval[int](p, `document.querySelectorAll('#datasets li').length`); n != 0 {
+		t.Errorf("%d datasets still listed after forgetting", n)
+	}
+	if got := eval[string](p, `[...document.querySelectorAll('#sessions li')].map(n => n.textContent).join('|')`); got != "Untitled session" {
+		t.Errorf("sessions after forgetting: %q, want only the new empty session", got)
+	}
+	p.checkClean(ready)
+}
