@@ -1,0 +1,111 @@
+//go:build js && wasm
+
+package main
+
+import (
+	"encoding/json"
+	"errors"
+	"fmt"
+	"strings"
+	"syscall/js"
+	"testing"
+
+	"quillcast/core/steps"
+	"quillcast/wasm/store"
+)
+
+// testApp returns an app whose store is in memory, as where the browser
+// offers no IndexedDB.
+func testApp() *app {
+	a := newApp()
+	a.storeOnce.Do(func() {
+		a.backend = store.NewMemory()
+		a.sessions = store.NewSessions(a.backend, now, newID)
+		a.sets = store.NewDatasets(a.backend, now)
+	})
+	return a
+}
+
+func bytesValue(s string) js.Value {
+	u8 := js.Global().Get("Uint8Array").New(len(s))
+	js.CopyBytesToJS(u8, []byte(s))
+	return u8
+}
+
+const ordersCSV = "month,units\n2024-01,10\n2024-02,12\n2024-03,11\n2024-04,13\n2024-05,15\n2024-06,14\n"
+
+func TestAttachAndExport(t *testing.T) {
+	a := testApp()
+	v, err := a.attach([]js.Value{bytesValue(ordersCSV), js.ValueOf("orders.csv")})
+	if err != nil {
+		t.Fatalf("attach: %v", err)
+	}
+	p := v.(preview)
+	if len(p.Series) != 1 || p.Series[0].Name != "units" || len(p.Series[0].Head) != 6 || !strings.HasPrefix(p.Series[0].Chart, "<svg") {
+		t.Fatalf("preview of a six-month file: %+v", p)
+	}
+	if list, _ := a.sets.List(); len(list) != 1 || list[0].Name != "orders.csv" {
+		t.Errorf("the attached file is not stored: %+v", list)
+	}
+	parts := `[{"kind":"prose","text":"# Orders\n"},{"kind":"steps","lines":[{"text":"load orders.csv value=units date=month"}]}]`
+	tests := []struct {
+		name     string
+		withData bool
+		want     []string
+		not      []string
+	}{
+		{"steps only", false, []string{"# Orders", "```quill\nload orders.csv"}, []string{"quill-data", "2024-03,11"}},
+		{"with data", true, []string{"```quill-data orders.csv\n", "2024-03,11"}, nil},
+	}
+	for _, tc := range tests {
+		t.Run(tc.name, func(t *testing.T) {
+			out, err := a.exportSession([]js.Value{js.ValueOf(parts), js.ValueOf(tc.withData)})
+			if err != nil {
+				t.Fatal(err)
+			}
+			text := out.(string)
+			for _, w := range tc.want {
+				if !strings.Contains(text, w) {
+					t.Errorf("session file lacks %q:\n%s", w, text)
+				}
+			}
+			for _, n := range tc.not {
+				if strings.Contains(text, n) {
+					t.Errorf("session file carries %q:\n%s", n, text)
+				}
+			}
+		})
+	}
+	missing := `[{"kind":"steps","lines":[{"text":"load other.csv"}]}]`
+	if _, err := a.exportSession([]js.Value{js.ValueOf(missing), js.ValueOf(true)}); err == nil || !strings.Contains(err.Error(), "not attached") {
+		t.Errorf("exporting with data a session whose file is missing: %v, want a 'not attached' error", err)
+	}
+}
+
+func TestMemoNeedsARun(t *testing.T) {
+	a := testApp()
+	if _, err := a.memoOf([]js.Value{js.ValueOf("md")}); err == nil || !strings.Contains(err.Error(), "run the steps first") {
+		t.Errorf("memo before any run: %v, want 'run the steps first'", err)
+	}
+}
+
+func TestFailureData(t *testing.T) {
+	tests := []struct {
+		name string
+		err  error
+		want Failure
+	}{
+		{"step error", &steps.Error{Step: 2, Line: 7, Column: 14, Msg: "unknown option"}, Failure{Message: "line 7, column 14: unknown option", Step: 2, Line: 7, Column: 14}},
+		{"conflict", fmt.Errorf("%w (version 3 there, 2 here)", store.ErrConflict), Failure{Message: store.ErrConflict.Error() + " (version 3 there, 2 here)", Code: "conflict"}},
+		{"plain", errors.New("no such file"), Failure{Message: "no such file"}},
+	}
+	for _, tc := range tests {
+		t.Run(tc.name, func(t *testing.T) {
+			got, _ := json.Marshal(failureOf(tc.err))
+			want, _ := json.Marshal(tc.want)
+			if string(got) != string(want) {
+				t.Errorf("failureOf(%v) = %s, want %s", tc.err, got, want)
+			}
+		})
+	}
+}
