@@ -88,7 +88,7 @@ func (r *reader) dateColumn(c int) (Frequency, []int) {
 		case d.shape == shapeNone && twoDigitYear(b):
 			r.fail(i, c, string(b), ErrNotDate, fmt.Sprintf("%s has a two-digit year; write the year with four digits, like the rest of the column (%s)", quoteCell(string(b)), example))
 		case d.shape == shapeNone:
-			r.fail(i, c, string(b), ErrNotDate, fmt.Sprintf("%s is not a period; write it like the rest of the column (%s)", quoteCell(string(b)), example))
+			r.fail(i, c, string(b), ErrNotDate, fmt.Sprintf("%s is not a period; write it like the rest of the column (%s), or delete the row if it holds a total or a note", quoteCell(string(b)), example))
 		case f != written:
 			r.fail(i, c, string(b), ErrFrequency, fmt.Sprintf("%s is a %s, but the column holds %s; write every period the same way", quoteCell(string(b)), f, example))
 		}

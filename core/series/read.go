@@ -79,6 +79,11 @@ func (r *reader) read(data []byte) {
 		r.fail(-1, -1, "", ErrEmpty, "the file holds no rows of data")
 		return
 	}
+	r.skipTitle()
+	if t.rows() == 0 {
+		r.fail(-1, -1, "", ErrEmpty, "the file holds a title but no table; load a file with a header line and rows of data")
+		return
+	}
 	header := r.opt.Header == WithHeader || r.opt.Header == DetectHeader && r.headerLooksLikeNames()
 	r.nameColumns(header)
 	if !r.dataRows(header) {
@@ -91,6 +96,28 @@ func (r *reader) read(data []byte) {
 		return
 	}
 	r.assemble(ro, st)
+}
+
+// skipTitle drops up to maxTitleLines rows of one cell at the top of a
+// table whose rows have more cells, such as a report title above the
+// column names, and says so.
+func (r *reader) skipTitle() {
+	t := r.t
+	if r.delim == 0 || t.rows() < 2 {
+		return
+	}
+	top := 0
+	for top < min(maxTitleLines, t.rows()-1) && t.width(top) == 1 {
+		top++
+	}
+	if top == 0 || t.width(top) < 2 {
+		return
+	}
+	for row := range top {
+		r.decide("line %d (%s) is a title above the table and is left out", t.line[row], quoteCell(string(trimCell(t.cell(row, 0)))))
+	}
+	t.first = t.first[top:]
+	t.line = t.line[top:]
 }
 
 // dataRows sets r.rows to the rows holding data, reports ragged rows and

@@ -164,6 +164,8 @@ var readTests = []struct {
 		want: "wide day\nunits 2024-03-01 [1 2]"},
 	{name: "dotted day-first dates", in: "Datum;Umsatz\n31.01.2024;1.234,56\n01.02.2024;99,5\n",
 		want: "wide day\nUmsatz 2024-01-31 [1234.56 99.5]", decision: "read day first"},
+	{name: "title above the table", in: "Wickery orders report\n\n\"month\",\"units\"\n2024-01,5\n2024-02,6\n",
+		want: "wide month\nunits 2024-01 [5 6]", decision: "is a title above the table"},
 	{name: "ISO week 53", in: "week,units\n2020-W52,1\n2020-W53,2\n2021-W01,3\n",
 		want: "wide week\nunits 2020-W52 [1 2 3]"},
 }

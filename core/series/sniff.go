@@ -72,18 +72,27 @@ func sizeText(n int) string {
 	return fmt.Sprintf("%.1f MB", float64(n)/1e6)
 }
 
+// maxTitleLines is the most lines above a table that are taken for a title
+// and left out.
+const maxTitleLines = 5
+
 // sniffDelimiter picks the delimiter from the first lines of data: the
 // candidate that appears the same number of times (outside quotes) on every
-// sampled line, preferring more columns, then tab, semicolon, bar, comma.
+// sampled line (title lines at the top aside), preferring more columns,
+// then tab, semicolon, bar, comma.
 // It returns 0 when no candidate appears: a file of one column.
 func sniffDelimiter(data []byte) byte {
 	const sample = 40
 	var counts [sample][len(delimiters)]int
+	var letters [sample]bool
 	lines := 0
 	inQuote := false
 	blank := true
 	for i := 0; i < len(data) && lines < sample; i++ {
 		c := data[i]
+		if c|0x20 >= 'a' && c|0x20 <= 'z' {
+			letters[lines] = true
+		}
 		if c == '"' {
 			inQuote = !inQuote
 			blank = false
@@ -113,9 +122,18 @@ func sniffDelimiter(data []byte) byte {
 	}
 	best, bestCols := byte(0), 0
 	for k, d := range delimiters {
-		n := counts[0][k]
+		// Title lines above the table may lack the delimiter.
+		// They must sit above a line of column names.
+		top := 0
+		for top < min(lines-1, maxTitleLines) && counts[top][k] == 0 {
+			top++
+		}
+		if top > 0 && !letters[top] {
+			continue
+		}
+		n := counts[top][k]
 		same := n > 0
-		for l := 1; l < lines && same; l++ {
+		for l := top + 1; l < lines && same; l++ {
 			same = counts[l][k] == n
 		}
 		if same && n > bestCols {
