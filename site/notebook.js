@@ -158,7 +158,9 @@ export class Notebook {
   outputOf(out) {
     const box = el("div", { class: "output" });
     if (out.status === "failed" && out.error) {
-      const where = out.error.line ? `Line ${out.error.line}, column ${out.error.column}: ` : "";
+      // Steps are what the page shows, so the place is told by step and
+      // column; the document line matters in the saved text only.
+      const where = out.error.column ? `Step ${out.step}, column ${out.error.column}: ` : `Step ${out.step}: `;
       box.append(el("p", { class: "msg error", role: "note" }, where + out.error.message));
     }
     if (out.status === "waiting") {

@@ -1,0 +1,63 @@
+package browsertest
+
+import (
+	"testing"
+	"time"
+
+	"github.com/chromedp/chromedp"
+	"github.com/chromedp/chromedp/kb"
+)
+
+// TestPasteAndDrop attaches data the two other ways: cells pasted from a
+// spreadsheet (tab-separated text) and a file dropped on the page.
+func TestPasteAndDrop(t *testing.T) {
+	p := openSite(t)
+	ready := p.open("")
+	eval[bool](p, `(() => {
+		const dt = new DataTransfer();
+		dt.setData('text/plain', 'quarter\trevenue\n2023-Q1\t1 204,5\n2023-Q2\t1 310,0\n2023-Q3\t1 288,25\n2023-Q4\t1 502,0\n2024-Q1\t1 250,0\n');
+		document.body.dispatchEvent(new ClipboardEvent('paste', { clipboardData: dt, bubbles: true }));
+		return true;
+	})()`)
+	waitFor(p, "the pasted cells in the rail", `[...document.querySelectorAll('#datasets li')].some(n => /^pasted-[0-9]+\.tsv$/.test(n.textContent))`)
+	waitFor(p, "the preview of the pasted cells", `document.getElementById('preview-dialog').open && document.getElementById('preview-body').textContent.includes('revenue')`)
+	p.run("closing the preview", 10*time.Second, chromedp.Click(chromedp.CSS("#preview-dialog button")))
+
+	eval[bool](p, `(() => {
+		const dt = new DataTransfer();
+		dt.items.add(new File(['day,calls\n2024-03-01,40\n2024-03-02,38\n2024-03-03,45\n2024-03-04,41\n'], 'call-centre.csv', { type: 'text/csv' }));
+		document.dispatchEvent(new DragEvent('drop', { dataTransfer: dt, bubbles: true, cancelable: true }));
+		return true;
+	})()`)
+	waitFor(p, "the dropped file in the rail", `[...document.querySelectorAll('#datasets li')].some(n => n.textContent === 'call-centre.csv')`)
+	waitFor(p, "the preview of the dropped file", `document.getElementById('preview-dialog').open && document.getElementById('preview-body').textContent.includes('calls')`)
+	p.checkClean(ready)
+}
+
+// TestKeyboard moves between steps, edits one and adds one without a mouse.
+func TestKeyboard(t *testing.T) {
+	p := openSite(t)
+	ready := p.open("")
+	first := stepSelector(p, "memo ")
+	p.run("focusing the first step", 10*time.Second, chromedp.Focus(chromedp.CSS(first)))
+	p.run("moving down", 10*time.Second, chromedp.KeyEvent(kb.ArrowDown))
+	if got := eval[string](p, `document.activeElement.textContent`); got != "load wickery-monthly-orders.csv value=units date=month" {
+		t.Fatalf("after ↓ the focus is on %q, want the load step", got)
+	}
+	p.run("editing, then leaving with Escape", 10*time.Second, chromedp.KeyEvent("\r"))
+	if tag := eval[string](p, `document.activeElement.tagName + '.' + document.activeElement.className`); tag != "INPUT.line-edit" {
+		t.Fatalf("Enter on a step focuses %q, want its edit box", tag)
+	}
+	p.run("cancelling", 10*time.Second, chromedp.KeyEvent(kb.Escape))
+	p.run("adding a step below", 10*time.Second, chromedp.KeyEvent("\r", chromedp.KeyModifiers(chromedp.ModifierCtrl)))
+	waitFor(p, "the new step's edit box", `document.activeElement.classList.contains('line-edit') && document.activeElement.value === ''`)
+	p.run("typing a step", 10*time.Second, chromedp.SendKeys(chromedp.CSS("input.line-edit"), "smooth trailing widht=4\r"))
+	waitFor(p, "the error marker", `document.querySelector('#parts mark.error-at') !== null`)
+	msg := eval[string](p, `document.querySelector('#parts mark.error-at').closest('.step').querySelector('.msg.error').textContent`)
+	if msg == "" {
+		t.Error("the misspelt option shows no message under its step")
+	}
+	t.Logf("message under the misspelt step: %s", msg)
+	p.screenshot("error-marker")
+	p.checkClean(ready)
+}
