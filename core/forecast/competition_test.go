@@ -56,16 +56,39 @@ func readCompetition(t testing.TB, rel string) []compSeries {
 // of Forecasting 16(4), 451-476, recomputed from the submitted forecasts):
 // naive2 6.30 and ses 6.29, each required within 0.3.
 //
-// Theta (published 4.41) is held to a wider band of 0.6: this package's
-// Theta is the standard form (simple exponential smoothing plus half the
-// regression slope), which scores 4.92 on these series however its
-// smoothing constant and initial level are estimated (tried: level0 fixed
-// or optimised, alpha up to 1, 0.99 or 0.9, smoothing the theta = 2 line
-// instead of the data: 4.92 to 5.01). The submitted Theta forecasts bend
-// like a damped trend on series whose recent trend opposes the long-run
-// line (series O81: steps -65, -52, -41, -31, ...), which no straight-line
-// form can produce. The band still requires Theta to beat ses and naive2
-// by over one point, as in the published table.
+// Theta (published 4.41) is held to a wider band of 0.6, because no
+// reading of the published method reaches 4.41 here. This package's Theta
+// is simple exponential smoothing plus half the regression slope (R. J.
+// Hyndman and B. Billah (2003), IJF 19(2), 287-290), equivalent to the
+// two-line procedure of V. Assimakopoulos and K. Nikolopoulos (2000), IJF
+// 16(4), 521-530: the theta = 0 line is the least squares line
+// extrapolated, the theta = 2 line 2y - line is extrapolated by simple
+// smoothing, and the two are averaged with equal weights (the procedure
+// as recalled from memory of that paper and of the M3 description). Every
+// choice below was made on the fit part only; scores are mean sMAPE over
+// the 174 series, 8 horizons:
+//
+//	smoothing on the data, alpha in [0,1], level0 = y[0] (this package)  4.92
+//	the same with level0 estimated with alpha                             4.92
+//	alpha restricted to [0.1, 1]                                          4.92
+//	two-line: smoothing on the theta = 2 line, alpha fitted on that line,
+//	  level0 = its first value / the mean of its first 3 / estimated      4.92
+//	earlier tries (level0 fixed or optimised, alpha up to 0.99 or 0.9)    4.92 to 5.01
+//
+// The submitted Theta forecasts (competition/m3-other-forecasts.csv, made
+// from the fit part) show why: on 169 of the 174 series their steps are
+// not constant in the horizon, while every form above forecasts a straight
+// line. Twice the submitted forecast minus the extrapolated regression
+// line, which should be the flat smoothing forecast of the theta = 2 line,
+// instead moves geometrically towards a limit (ratios about 0.3 to 0.85 a step,
+// per series), so the steps tend to half the regression slope from a
+// local start, like a damped trend. On series O81 (63 fit values ending
+// 3022, 2934, 2752, 2658; half slope +15.4) the first submitted forecast
+// is 2577.5, below the last value, which simple smoothing of a falling
+// series cannot give. That extrapolation is not in the published
+// descriptions we know, so it is not copied. The band still requires
+// Theta to beat ses and naive2 by over one point, as in the published
+// table.
 func TestCompetitionOther(t *testing.T) {
 	series := readCompetition(t, "competition/m3-other.csv")
 	if len(series) != 174 {
