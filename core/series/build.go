@@ -1,6 +1,7 @@
 package series
 
 import (
+	"cmp"
 	"fmt"
 	"math"
 	"slices"
@@ -25,6 +26,8 @@ type builder struct {
 	dups  map[int][]int32  // slot -> positions in idx of every row at slot, when more than one
 	kinds map[error]int    // problems listed so far, by cause
 	more  map[error][2]int // problems not listed: count and first line
+
+	firstProblem int // index in r.ds.Problems of this series' first problem
 }
 
 // ord returns the period ordinal of the k-th row of the series.
@@ -59,6 +62,7 @@ func (b *builder) build(labelCols []int) (*Series, []Label) {
 		r.decide("series %q has no values and is left out", b.name)
 		return nil, nil
 	}
+	b.firstProblem = len(r.ds.Problems)
 	n := hi - lo + 1
 	if r.slots+n > maxSpan(len(r.rows)) {
 		r.spanError(b.name, Period{b.freq, lo}, Period{b.freq, hi})
@@ -123,8 +127,20 @@ func (b *builder) build(labelCols []int) (*Series, []Label) {
 		r.ds.Changes = append(r.ds.Changes, changes...)
 	}
 	b.missing()
+	b.sortProblems()
 	b.closeProblems()
 	return b.s, b.labels(labelCols)
+}
+
+// sortProblems orders the problems listed for this series by period,
+// then line.
+func (b *builder) sortProblems() {
+	slices.SortStableFunc(b.r.ds.Problems[b.firstProblem:], func(x, y Problem) int {
+		if c := cmp.Compare(x.Period.Ordinal, y.Period.Ordinal); c != 0 {
+			return c
+		}
+		return cmp.Compare(x.Line, y.Line)
+	})
 }
 
 // duplicates combines or reports several rows for one period.

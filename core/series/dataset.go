@@ -22,7 +22,7 @@ type Dataset struct {
 	Series      []*Series // wide: one per value column; long: one per key and value column, in order of appearance
 	Labels      [][]Label // long layout: Labels[i] holds the other text columns of Series[i]
 	Decisions   []string  // every decision taken while reading, one plain sentence each
-	Problems    []Problem // gaps, missing values, duplicates and out-of-order rows, by series then line
+	Problems    []Problem // gaps, missing values, duplicates and out-of-order rows, by series, then period, then line
 	Changes     []Change  // every change made by sorting, combining duplicates or filling, in order
 }
 

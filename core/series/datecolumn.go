@@ -79,18 +79,19 @@ func (r *reader) dateColumn(c int) (Frequency, []int) {
 		}
 		return NoFrequency, nil
 	}
-	example := shapeNames[cells[firstOf[written]].shape]
+	example := quoteCell(string(trimCell(r.t.cell(int(r.rows[firstOf[written]]), c))))
+	r.decide("column %q holds the periods, written like %s", name, example)
 	for i, d := range cells {
 		b := trimCell(r.t.cell(int(r.rows[i]), c))
 		switch f := freqOfShape(d.shape); {
 		case d.shape == shapeNone && isMissing(b, r.opt.Missing):
 			r.fail(i, c, string(b), ErrNotDate, "the period is missing; fill it in or delete the row")
 		case d.shape == shapeNone && twoDigitYear(b):
-			r.fail(i, c, string(b), ErrNotDate, fmt.Sprintf("%s has a two-digit year; write the year with four digits, like the rest of the column (%s)", quoteCell(string(b)), example))
+			r.fail(i, c, string(b), ErrNotDate, fmt.Sprintf("%s has a two-digit year; write the year with four digits, like the rest of the column, as in %s", quoteCell(string(b)), example))
 		case d.shape == shapeNone:
-			r.fail(i, c, string(b), ErrNotDate, fmt.Sprintf("%s is not a period; write it like the rest of the column (%s), or delete the row if it holds a total or a note", quoteCell(string(b)), example))
+			r.fail(i, c, string(b), ErrNotDate, fmt.Sprintf("%s is not a period; write it like the rest of the column, as in %s, or delete the row if it holds a total or a note", quoteCell(string(b)), example))
 		case f != written:
-			r.fail(i, c, string(b), ErrFrequency, fmt.Sprintf("%s is a %s, but the column holds %s; write every period the same way", quoteCell(string(b)), f, example))
+			r.fail(i, c, string(b), ErrFrequency, fmt.Sprintf("%s is a %s, but the column holds %s such as %s; write every period the same way", quoteCell(string(b)), f, written.Plural(), example))
 		}
 	}
 	order := r.dayOrder(c, cells)
@@ -109,7 +110,6 @@ func (r *reader) dateColumn(c int) (Frequency, []int) {
 	if r.failed() {
 		return NoFrequency, nil
 	}
-	r.decide("column %q holds the periods, written as %s", name, example)
 	freq := r.frequency(c, written, ords)
 	if times > 0 {
 		r.decide("%d dates in column %q carry a time of day; the time is dropped and each row counts for the %s its date falls in", times, name, freq)

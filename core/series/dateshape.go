@@ -20,20 +20,6 @@ const (
 	shapeInt               // 17: a plain position
 )
 
-// shapeNames describe shapes in decisions and messages.
-var shapeNames = [...]string{
-	shapeNone: "text",
-	shapeYMD:  "dates like 2024-03-01",
-	shapeYM:   "months like 2024-03",
-	shapeYQ:   "quarters like 2024-Q1",
-	shapeYW:   "ISO weeks like 2024-W05",
-	shapeY:    "years like 2024",
-	shapeMY:   "months like 03/2024",
-	shapeAB:   "dates like 01/02/2024",
-	shapeMonY: "months like Mar 2024",
-	shapeInt:  "positions like 1, 2, 3",
-}
-
 // dateCell is one date cell taken apart. For shapeAB, a and b are the first
 // and second numbers, whose roles the column decides.
 type dateCell struct {

@@ -25,7 +25,7 @@ func ExampleRead() {
 	// units 2024-01 2024-04 [1204.5 1187 NaN 1310.25]
 	// decided: cells are separated by semicolons
 	// decided: the first line holds the column names: "month", "units"
-	// decided: column "month" holds the periods, written as months like 2024-03
+	// decided: column "month" holds the periods, written like "2024-01"
 	// decided: column "units": commas are decimal marks and points or spaces group thousands (1.234,5 is one thousand two hundred thirty-four and a half), decided from all 3 numbers, such as "1.204,5" on line 2
 	// decided: each value column is one series: "units"
 	// problem: series "units" has no row for 2024-03, between line 3 and line 4; add the missing rows, or set fill to carry forward, linear or seasonal

@@ -83,10 +83,10 @@ func (r *reader) valueColumn(c int) []float64 {
 		r.decimal, r.decCol = dec, name
 	}
 	if money > 0 {
-		r.decide("column %q: currency signs in %d cells are left out", name, money)
+		r.decide("column %q: currency signs in %d %s are left out", name, money, plural(money, "cell", "cells"))
 	}
 	if percent > 0 {
-		r.decide("column %q: percent signs in %d cells are left out, so 12%% reads as 12", name, percent)
+		r.decide("column %q: percent signs in %d %s are left out, so 12%% reads as 12", name, percent, plural(percent, "cell", "cells"))
 	}
 	values := make([]float64, len(r.rows))
 	for i, row := range r.rows {
