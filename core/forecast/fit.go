@@ -32,7 +32,9 @@ func (f *Fit) Residuals() []float64 {
 
 // Sigma2 returns the one-step error variance behind the analytic
 // prediction intervals and whether the method estimated one. Its divisor
-// follows each method's convention (stated on the method's type).
+// follows each method's convention (stated on the method's type). For
+// Holt-Winters with a multiplicative season it is still SSE/n, but the
+// interval uses the relative variance in Stats ("relative-sigma2").
 func (f *Fit) Sigma2() (float64, bool) {
 	return f.sigma2, f.hasSigma2
 }
@@ -57,8 +59,8 @@ func (f *Fit) HasInterval() bool {
 // quantile for the mean and regression methods. It returns an error when
 // the level or horizon is out of range, and an error wrapping
 // [ErrNoInterval] when the method has no analytic formula (the moving
-// average, combinations, multiplicative Holt-Winters): the caller then
-// uses empirical intervals from rolling-origin errors.
+// average, combinations, differenced series): the caller then uses
+// empirical intervals from rolling-origin errors.
 func (f *Fit) Interval(h int, level float64) (lo, hi []float64, err error) {
 	if !(level > 0 && level < 1) {
 		return nil, nil, fmt.Errorf("interval level %g is out of range; write a coverage between 0 and 1 such as 0.8 or 0.95", level)

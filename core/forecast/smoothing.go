@@ -16,8 +16,11 @@ import (
 // heuristic of smoothing_init.go. Alpha, Beta and Gamma lie in [0, 1] and
 // Phi in (0, 1]; estimated values of Phi lie in [0.8, 0.995].
 //
-// The analytic interval is the state-space one (smoothing_interval.go) for
-// every form but the multiplicative season, which has none here.
+// The analytic interval is the state-space one with additive errors
+// (smoothing_interval.go), and for a multiplicative season the approximate
+// one with errors proportional to the forecast
+// (smoothing_interval_mult.go), whose relative variance is reported in
+// Stats as "relative-sigma2".
 //
 // Sources: R. G. Brown (1959), Statistical Forecasting for Inventory
 // Control (simple smoothing); C. C. Holt (1957, reprinted 2004),
@@ -135,9 +138,21 @@ func (s Smoothing) Fit(y []float64, season int) (*Fit, error) {
 	f.variance = etsVariance(form, sol.p, f.sigma2)
 	f.Notes = boundNotes(name, sol, pr.free)
 	if s.Season == Multiplicative {
-		f.Notes = append(f.Notes, "no analytic prediction interval for a multiplicative season here; use empirical intervals from a backtest")
+		f.Notes = append(f.Notes, multSeasonInterval(f, form, sol.p, tr))
 	}
 	return f, nil
+}
+
+// multSeasonInterval sets the approximate interval of a multiplicative
+// season (smoothing_interval_mult.go) and returns a note on it.
+func multSeasonInterval(f *Fit, form esForm, p [nConst]float64, tr esTrace) string {
+	rel2, ok := relativeSigma2(f.train, tr.fitted)
+	if !ok {
+		return "no analytic prediction interval: a fitted value is zero, so the relative errors cannot be formed; use empirical intervals from a backtest"
+	}
+	f.variance = multSeasonVariance(form, p, tr.last, f.N, rel2)
+	f.Stats = append(f.Stats, Param{Name: "relative-sigma2", Value: rel2, Estimated: true})
+	return fmt.Sprintf("the prediction interval is approximate: it treats each one-step error as a share of the forecast (relative standard error %.1f%%), so it widens with the level and the season", 100*math.Sqrt(rel2))
 }
 
 // openStates lists the initial states not given by hand, as indices of

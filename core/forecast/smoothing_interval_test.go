@@ -84,12 +84,45 @@ func TestAdditiveSeasonVariance(t *testing.T) {
 	}
 }
 
-func TestSmoothingNoInterval(t *testing.T) {
+// TestSmoothingMultiplicativeInterval: a multiplicative Holt-Winters fit
+// has the approximate interval of smoothing_interval_mult.go, built from
+// its own relative one-step errors and final states (recomputed here
+// from the fit's components), and says that it is approximate.
+func TestSmoothingMultiplicativeInterval(t *testing.T) {
 	y := seededSeasonalFixed()
 	f := mustFit(t, Smoothing{Trend: true, Season: Multiplicative}, y, 4)
-	if _, _, err := f.Interval(4, 0.9); !errors.Is(err, ErrNoInterval) {
-		t.Errorf("multiplicative interval error %v, want ErrNoInterval", err)
+	lo, hi, err := f.Interval(8, 0.95)
+	if err != nil {
+		t.Fatal(err)
 	}
+	rel2 := 0.0
+	for i, v := range y {
+		r := (v - f.Fitted[i]) / f.Fitted[i]
+		rel2 += r * r / float64(len(y))
+	}
+	p := [nConst]float64{f.Params[0].Value, f.Params[1].Value, f.Params[2].Value, 1}
+	n := len(y)
+	last := esStates{level: f.Components["level"][n-1], trend: f.Components["trend"][n-1], season: f.Components["season"][n-4:]}
+	v, _ := multSeasonVariance(esForm{trend: true, season: Multiplicative, m: 4}, p, last, n, rel2)(8)
+	point := f.Forecast(8)
+	q := 1.959963984540054 // standard normal 97.5% point (common practice)
+	for h := range 8 {
+		want := q * math.Sqrt(v[h])
+		if !within(hi[h]-point[h], want, 1e-9, 1e-9) || !within(point[h]-lo[h], want, 1e-9, 1e-9) {
+			t.Errorf("h=%d: interval %g..%g around %g, want half-width %g", h+1, lo[h], hi[h], point[h], want)
+		}
+	}
+	found := false
+	for _, note := range f.Notes {
+		found = found || strings.Contains(note, "approximate")
+	}
+	if !found {
+		t.Errorf("notes %q do not say the interval is approximate", f.Notes)
+	}
+}
+
+func TestSmoothingIntervalLevel(t *testing.T) {
+	y := seededSeasonalFixed()
 	g := mustFit(t, Smoothing{}, y, 0)
 	for _, level := range []float64{0, 1, -0.5, math.NaN()} {
 		if _, _, err := g.Interval(3, level); err == nil || !strings.Contains(err.Error(), "between 0 and 1") {
