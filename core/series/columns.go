@@ -14,6 +14,7 @@ type colStats struct {
 	cells   int             // cells sampled
 	missing int             // missing markers and empty cells
 	shapes  [10]int         // date shapes, by shape
+	dotted  int             // months written with a point, which may be numbers
 	numbers int             // cells that read as a number in some format
 	ints    int             // cells that are whole numbers without marks
 	text    int             // cells that are neither numbers nor dates
@@ -29,6 +30,16 @@ func (c *colStats) dated() int {
 		}
 	}
 	return n
+}
+
+// datedIf returns the cells with a calendar date shape, counting months
+// written with a point (2024.03) only when the column's name says it holds
+// periods.
+func (c *colStats) datedIf(named bool) int {
+	if named {
+		return c.dated()
+	}
+	return c.dated() - c.dotted
 }
 
 // present returns the cells that are not missing.
@@ -68,6 +79,9 @@ func (r *reader) stats() []colStats {
 			}
 			d := scanDate(b)
 			s.shapes[d.shape]++
+			if d.dotted {
+				s.dotted++
+			}
 			nb := scanNumber(b)
 			switch {
 			case nb.ok:
@@ -182,7 +196,7 @@ func quotedList(names []string, n int) string {
 // Name hints, lower case.
 var (
 	dateNames    = []string{"date", "day", "week", "month", "quarter", "year", "period", "time", "timestamp", "datetime", "when", "month start", "week start"}
-	counterNames = []string{"period", "t", "index", "obs", "observation", "row", "no", "no.", "n", "#", "id", "position", "seq"}
+	counterNames = []string{"period", "t", "index", "obs", "observation", "row", "no", "no.", "n", "#", "position", "seq"}
 	keyNames     = []string{"series", "series id", "name", "id", "key", "item", "sku", "product", "store", "shop", "region", "code", "label", "group", "unique_id"}
 	yearNames    = []string{"year", "yr", "yyyy"}
 	quarterNames = []string{"quarter", "qtr", "q"}

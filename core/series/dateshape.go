@@ -27,6 +27,7 @@ type dateCell struct {
 	a, b    uint8 // month and day (YMD), month (YM, MY, MonY), quarter, week, or the two leading numbers of AB
 	shape   shape
 	hasTime bool // a time of day follows the date
+	dotted  bool // a month written with a point (2024.03, 03.2024), which may also be a number
 }
 
 // cellOf packs the parts of a date cell; parts were range-checked by the
@@ -94,8 +95,14 @@ func scanDate(b []byte) dateCell {
 	sep := b[i]
 	v2, n2, j := digits(b, i+1)
 	if n2 == 4 && j == len(b) {
+		// 03.2024 is a month, but 3.2024 or 12.0001 is more likely a number.
+		if sep == '.' && (n1 != 2 || v2 < 1000 || v2 > 2999) {
+			return dateCell{}
+		}
 		if v1 >= 1 && v1 <= 12 {
-			return cellOf(shapeMY, v2, v1, 0)
+			c := cellOf(shapeMY, v2, v1, 0)
+			c.dotted = sep == '.'
+			return c
 		}
 		return dateCell{}
 	}
@@ -143,7 +150,9 @@ func scanYearFirst(b []byte, y, i int) dateCell {
 		return dateCell{}
 	}
 	if j == len(b) {
-		return cellOf(shapeYM, y, m, 0)
+		d := cellOf(shapeYM, y, m, 0)
+		d.dotted = c == '.'
+		return d
 	}
 	if b[j] != c {
 		return dateCell{}

@@ -47,7 +47,7 @@ func convert(n int, from, to Frequency) int {
 func (r *reader) frequency(c int, written Frequency, ords []int) Frequency {
 	name := r.names[c]
 	if want := r.opt.Frequency; want != NoFrequency {
-		if want == written {
+		if want == written || want == Index && written == Year {
 			r.decide("the periods are %s, as the frequency option says", want.Plural())
 			return want
 		}

@@ -46,38 +46,35 @@ func (r *reader) chooseRoles(st []colStats) (roles, bool) {
 			return ro, true
 		}
 	}
-	// A column of calendar dates, preferring one whose name says so.
-	for _, wantHint := range []bool{true, false} {
-		for c, name := range r.names {
-			if p := st[c].present(); p > 0 && 2*st[c].dated() >= p && hinted(name, dateNames) == wantHint {
+	// Columns whose names say they hold periods come first: calendar
+	// dates, then years, then plain positions.
+	named := func(c int) bool { return hinted(r.names[c], dateNames) }
+	years := func(c int) bool { return st[c].present() > 0 && st[c].shapes[shapeY] == st[c].present() }
+	pick := func(ok func(c int) bool) bool {
+		for c := range r.names {
+			if ok(c) {
 				ro.date = c
-				return ro, true
+				return true
 			}
 		}
+		return false
 	}
-	// A column of years: named so, or counting up by one from the top.
-	for c, name := range r.names {
-		if p := st[c].present(); p == 0 || st[c].shapes[shapeY] != p {
-			continue
-		}
-		if hinted(name, dateNames) || r.countsUp(c) {
-			ro.date = c
-			return ro, true
+	dated := func(hint bool) func(int) bool {
+		return func(c int) bool {
+			p := st[c].present()
+			return p > 0 && 2*st[c].datedIf(hint) >= p && named(c) == hint
 		}
 	}
-	// Plain positions in a column named for them.
-	for c, name := range r.names {
-		if whole(c) && (hinted(name, counterNames) || hinted(name, dateNames)) {
-			ro.date = c
-			return ro, true
-		}
-	}
-	// A column named for dates that holds none: read it to report why.
-	for c, name := range r.names {
-		if hinted(name, dateNames) && st[c].present() > 0 && !st[c].numeric() {
-			ro.date = c
-			return ro, true
-		}
+	// The cases are tried in order; the first that picks a column ends it.
+	switch {
+	case pick(dated(true)),
+		pick(func(c int) bool { return named(c) && years(c) }),
+		pick(func(c int) bool { return whole(c) && (named(c) || hinted(r.names[c], counterNames)) }),
+		// Then columns that look like periods without saying so.
+		pick(dated(false)),
+		pick(func(c int) bool { return years(c) && r.countsUp(c) }),
+		// A column named for periods that holds none: read it to report why.
+		pick(func(c int) bool { return named(c) && st[c].present() > 0 && !st[c].numeric() }):
 	}
 	return ro, true
 }
