@@ -119,8 +119,16 @@ async function listSessions() {
 
 async function listDatasets() {
   const list = await call("datasets");
-  $("datasets").replaceChildren(...list.map((d) => el("li", {},
-    el("button", { type: "button", class: "link", onclick: () => showPreview(d.name) }, d.name))));
+  $("datasets").replaceChildren(...list.map((d) => el("li", { class: "with-action" },
+    el("button", { type: "button", class: "link", title: "Show what was read", onclick: () => showPreview(d.name) }, d.name),
+    el("button", {
+      type: "button", class: "remove", "aria-label": `Remove ${d.name} from this browser`, title: "Remove from this browser",
+      onclick: async () => {
+        if (!confirm(`Remove ${d.name} from this browser? Sessions that load it will ask for it again.`)) return;
+        await call("removeDataset", d.name);
+        await listDatasets();
+      },
+    }, "×"))));
 }
 
 async function openSession(id) {

@@ -222,14 +222,20 @@ export class Notebook {
         return;
       }
       if (e.key === "Enter") { e.preventDefault(); apply(); return; }
-      if (e.key === "Tab" && list.items && list.items.length > 0) {
+      if (e.key === "Tab" && !e.shiftKey) {
+        // Complete from suggestions for exactly what is typed now.
         e.preventDefault();
-        const s = list.items[0];
-        const chars = Array.from(input.value);
-        input.value = chars.slice(0, s.from - 1).join("") + s.text + chars.slice(s.to - 1).join("");
-        const caret = Array.from(chars.slice(0, s.from - 1).join("") + s.text).join("").length;
-        input.setSelectionRange(caret, caret);
-        suggest();
+        const asked = input.value;
+        const col = Array.from(asked.slice(0, input.selectionStart)).length + 1;
+        this.complete(asked, col).then((items) => {
+          if (!items || items.length === 0 || input.value !== asked) return;
+          const s = items[0];
+          const chars = Array.from(asked);
+          const head = chars.slice(0, s.from - 1).join("") + s.text;
+          input.value = head + chars.slice(s.to - 1).join("");
+          input.setSelectionRange(head.length, head.length);
+          suggest();
+        });
         return;
       }
       if (e.key === "ArrowUp" || e.key === "ArrowDown") {

@@ -51,6 +51,12 @@ func TestKeyboard(t *testing.T) {
 	p.run("cancelling", 10*time.Second, chromedp.KeyEvent(kb.Escape))
 	p.run("adding a step below", 10*time.Second, chromedp.KeyEvent("\r", chromedp.KeyModifiers(chromedp.ModifierCtrl)))
 	waitFor(p, "the new step's edit box", `document.activeElement.classList.contains('line-edit') && document.activeElement.value === ''`)
+	// Completion: "smo" and Tab give the verb.
+	p.run("typing the start of a verb", 10*time.Second, chromedp.SendKeys(chromedp.CSS("input.line-edit"), "smo"))
+	waitFor(p, "the completion list", `[...document.querySelectorAll('.suggest li code')].every(c => c.textContent.startsWith('smo')) && document.querySelectorAll('.suggest li').length > 0`)
+	p.run("completing", 10*time.Second, chromedp.KeyEvent(kb.Tab))
+	waitFor(p, "the completed verb", `document.querySelector('input.line-edit').value.startsWith('smooth')`)
+	eval[bool](p, `(() => { document.querySelector('input.line-edit').value = ''; return true; })()`)
 	p.run("typing a step", 10*time.Second, chromedp.SendKeys(chromedp.CSS("input.line-edit"), "smooth trailing widht=4\r"))
 	waitFor(p, "the error marker", `document.querySelector('#parts mark.error-at') !== null`)
 	msg := eval[string](p, `document.querySelector('#parts mark.error-at').closest('.step').querySelector('.msg.error').textContent`)
