@@ -19,7 +19,7 @@ func TestPasteAndDrop(t *testing.T) {
 		document.body.dispatchEvent(new ClipboardEvent('paste', { clipboardData: dt, bubbles: true }));
 		return true;
 	})()`)
-	waitFor(p, "the pasted cells in the rail", `[...document.querySelectorAll('#datasets li')].some(n => /^pasted-[0-9]+\.tsv$/.test(n.textContent))`)
+	waitFor(p, "the pasted cells in the rail", `[...document.querySelectorAll('#datasets li .link')].some(n => /^pasted-[0-9]+\.tsv$/.test(n.textContent))`)
 	waitFor(p, "the preview of the pasted cells", `document.getElementById('preview-dialog').open && document.getElementById('preview-body').textContent.includes('revenue')`)
 	p.run("closing the preview", 10*time.Second, chromedp.Click(chromedp.CSS("#preview-dialog button")))
 
@@ -29,7 +29,7 @@ func TestPasteAndDrop(t *testing.T) {
 		document.dispatchEvent(new DragEvent('drop', { dataTransfer: dt, bubbles: true, cancelable: true }));
 		return true;
 	})()`)
-	waitFor(p, "the dropped file in the rail", `[...document.querySelectorAll('#datasets li')].some(n => n.textContent === 'call-centre.csv')`)
+	waitFor(p, "the dropped file in the rail", `[...document.querySelectorAll('#datasets li .link')].some(n => n.textContent === 'call-centre.csv')`)
 	waitFor(p, "the preview of the dropped file", `document.getElementById('preview-dialog').open && document.getElementById('preview-body').textContent.includes('calls')`)
 	p.checkClean(ready)
 }

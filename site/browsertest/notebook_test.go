@@ -86,7 +86,7 @@ func TestNotebook(t *testing.T) {
 		t.Fatal(err)
 	}
 	p.run("attaching a file", 20*time.Second, chromedp.SetUploadFiles(chromedp.CSS("#file-input"), []string{csv}))
-	waitFor(p, "the attached dataset in the rail", `[...document.querySelectorAll('#datasets li')].some(n => n.textContent === 'harbour-weekly.csv')`)
+	waitFor(p, "the attached dataset in the rail", `[...document.querySelectorAll('#datasets li .link')].some(n => n.textContent === 'harbour-weekly.csv')`)
 	waitFor(p, "the preview", `document.getElementById('preview-dialog').open && document.querySelectorAll('#preview-body svg.qc').length > 0`)
 	p.screenshot("attached-file")
 	p.run("closing the preview", 10*time.Second, chromedp.Click(chromedp.CSS("#preview-dialog button")))
