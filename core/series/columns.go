@@ -101,22 +101,36 @@ func (r *reader) stats() []colStats {
 }
 
 // headerLooksLikeNames reports whether the first row holds column names:
-// some cell in it is text while the column below it is not, or every cell
-// is text.
+// some cell in it is text while the cells below it are numbers or dates,
+// or every cell in it is text.
 func (r *reader) headerLooksLikeNames() bool {
 	t := r.t
+	isText := func(b []byte) bool {
+		return len(b) > 0 && !isMissing(b, r.opt.Missing) && scanDate(b).shape == shapeNone && !scanNumber(b).ok
+	}
 	w := t.width(0)
-	texts := 0
+	texts, filled := 0, 0
 	for c := 0; c < w; c++ {
 		b := trimCell(t.cell(0, c))
-		if len(b) == 0 || isMissing(b, r.opt.Missing) {
+		if len(b) == 0 {
 			continue
 		}
-		if scanDate(b).shape == shapeNone && !scanNumber(b).ok {
-			texts++
+		filled++
+		if !isText(b) {
+			continue
+		}
+		texts++
+		below := 0
+		for row := 1; row < min(t.rows(), 6); row++ {
+			if cell := trimCell(t.cell(row, c)); len(cell) > 0 && !isMissing(cell, r.opt.Missing) && !isText(cell) {
+				below++
+			}
+		}
+		if below > 0 {
+			return true
 		}
 	}
-	return texts > 0
+	return texts > 0 && texts == filled
 }
 
 // nameColumns sets r.names from the header row, or makes names up.

@@ -41,10 +41,13 @@
 // 1.234,5; 1 234,5), currency signs, percent signs and negatives in
 // parentheses; the decimal mark is decided per column from all of its
 // cells and the decision is stated. Dates may be written 2024-03-01,
-// 2024-03, 2024-Q1, 2024Q1, 2024-W05, 2024, 03/2024, 01/02/2024 (day or
-// month first, decided once per column), Mar 2024 or March 2024, with or
-// without a time of day. A year column beside a quarter or month column
-// gives the periods together.
+// 2024-03, 2024-Q1, 2024Q1, Q1 2024, 2024-W05, 2024, 03/2024, 01/02/2024
+// (day or month first, decided once per column), Mar 2024, March 2024,
+// 1 Mar 2024 or Mar 1, 2024, with or without a time of day. Full dates that
+// all fall on the same day of the month are read as months (or quarters or
+// years), on the same weekday as ISO weeks. A year column beside a quarter
+// or month column gives the periods together. Up to five title lines above
+// the table are left out.
 //
 // What Read decided is in [Dataset.Decisions]; gaps, missing values,
 // duplicate periods and rows out of order are in [Dataset.Problems] with

@@ -135,7 +135,7 @@ func (r *reader) dataRows(header bool) bool {
 		if w < width {
 			r.failLine(int(t.line[row]), ErrRagged, fmt.Sprintf(
 				"this line has %d %s but the first line has %d; add the missing cells, or put quotes around a cell that holds a %s",
-				w, plural(w, "cell", "cells"), width, delimiterWord(r, row)))
+				w, plural(w, "cell", "cells"), width, r.delimiterWord()))
 			continue
 		}
 		if w > width {
@@ -146,7 +146,7 @@ func (r *reader) dataRows(header bool) bool {
 			if extra {
 				r.failLine(int(t.line[row]), ErrRagged, fmt.Sprintf(
 					"this line has %d cells but the first line has %d; put quotes around a cell that holds a %s, as in \"1,5\"",
-					w, width, delimiterWord(r, row)))
+					w, width, r.delimiterWord()))
 				continue
 			}
 		}
@@ -184,7 +184,7 @@ func (r *reader) dataRows(header bool) bool {
 }
 
 // delimiterWord names the file's delimiter for ragged-row messages.
-func delimiterWord(r *reader, _ int) string {
+func (r *reader) delimiterWord() string {
 	switch r.delim {
 	case ',':
 		return "comma"

@@ -166,6 +166,8 @@ var readTests = []struct {
 		want: "wide day\nUmsatz 2024-01-31 [1234.56 99.5]", decision: "read day first"},
 	{name: "title above the table", in: "Wickery orders report\n\n\"month\",\"units\"\n2024-01,5\n2024-02,6\n",
 		want: "wide month\nunits 2024-01 [5 6]", decision: "is a title above the table"},
+	{name: "long layout without a header", in: "A,2024-01,5\nA,2024-02,6\nB,2024-01,7\nB,2024-02,8\n", opt: ReadOptions{Layout: Long},
+		want: "long month\nA 2024-01 [5 6]\nB 2024-01 [7 8]", decision: "holds data, not column names"},
 	{name: "ISO week 53", in: "week,units\n2020-W52,1\n2020-W53,2\n2021-W01,3\n",
 		want: "wide week\nunits 2020-W52 [1 2 3]"},
 }
