@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"math"
 	"strconv"
+	"strings"
 )
 
 // This file reads value columns: it decides each column's decimal mark
@@ -11,106 +12,129 @@ import (
 
 // valueColumn reads column c of every data row; missing cells are NaN.
 func (r *reader) valueColumn(c int) []float64 {
-	name := r.names[c]
-	var first [evAmbiguous + 1]int
+	dec, ok := r.decideMark([]int{c}, fmt.Sprintf("column %q", r.names[c]), r.names[c])
+	if !ok {
+		return nil
+	}
+	values := make([]float64, len(r.rows))
+	for i := range r.rows {
+		values[i] = r.number(i, c, dec)
+	}
+	return values
+}
+
+// number reads the cell of data row i in column c with decimal mark dec:
+// NaN when missing, 0 with an error recorded when not a number.
+func (r *reader) number(i, c int, dec byte) float64 {
+	b := trimCell(r.t.cell(int(r.rows[i]), c))
+	if ev, ok := quickNumber(b); ok && (dec == '.' || ev == evNone) {
+		if v, err := strconv.ParseFloat(string(b), 64); err == nil {
+			return v
+		}
+	}
+	if isMissing(b, r.opt.Missing) {
+		return math.NaN()
+	}
+	nb := scanNumber(b)
+	v, why := nb.value(dec)
+	if why != "" || (nb.ok && (math.IsInf(v, 0) || math.IsNaN(v))) {
+		r.fail(i, c, string(b), ErrNotNumber, notNumber(b, why, dec, nb))
+		return 0
+	}
+	return v
+}
+
+// cellRef is one cell: data row i (an index into r.rows), column c.
+type cellRef struct{ i, c int }
+
+// decideMark decides the decimal mark of the cells of columns cols from
+// all of them, or from the option, and states the decision; what names
+// the cells in sentences ("column \"units\""), name the column a later
+// undecided column may follow. It reports false after recording an error.
+func (r *reader) decideMark(cols []int, what, name string) (byte, bool) {
+	var first [evAmbiguous + 1]cellRef
 	var count [evAmbiguous + 1]int
-	for k := range first {
-		first[k] = -1
-	}
 	money, percent := 0, 0
-	for i, row := range r.rows {
-		b := trimCell(r.t.cell(int(row), c))
-		if ev, ok := quickNumber(b); ok {
-			count[ev]++
-			if first[ev] < 0 {
-				first[ev] = i
-			}
-			continue
-		}
-		if isMissing(b, r.opt.Missing) {
-			continue
-		}
-		nb := scanNumber(b)
-		if !nb.ok {
-			continue
-		}
-		if nb.money {
-			money++
-		}
-		if nb.percent {
-			percent++
-		}
-		ev := nb.markEvidence()
+	note := func(ev evidence, i, c int) {
 		count[ev]++
-		if first[ev] < 0 {
-			first[ev] = i
+		if count[ev] == 1 {
+			first[ev] = cellRef{i, c}
 		}
 	}
-	cellAt := func(i int) string { return string(trimCell(r.t.cell(int(r.rows[i]), c))) }
+	for _, c := range cols {
+		for i, row := range r.rows {
+			b := trimCell(r.t.cell(int(row), c))
+			if ev, ok := quickNumber(b); ok {
+				note(ev, i, c)
+				continue
+			}
+			if isMissing(b, r.opt.Missing) {
+				continue
+			}
+			nb := scanNumber(b)
+			if !nb.ok {
+				continue
+			}
+			if nb.money {
+				money++
+			}
+			if nb.percent {
+				percent++
+			}
+			note(nb.markEvidence(), i, c)
+		}
+	}
+	text := func(at cellRef) string { return quoteCell(string(trimCell(r.t.cell(int(r.rows[at.i]), at.c)))) }
+	raw := func(at cellRef) string { return string(trimCell(r.t.cell(int(r.rows[at.i]), at.c))) }
+	numbers := count[evNone] + count[evDot] + count[evComma] + count[evAmbiguous]
 	dec := byte('.')
 	switch {
 	case r.opt.DecimalMark == '.' || r.opt.DecimalMark == ',':
 		dec = r.opt.DecimalMark
 		if count[evDot]+count[evComma]+count[evAmbiguous] > 0 {
-			r.decide("column %q: %s, as the decimal mark option says", name, markSentence(dec))
+			r.decide("%s: %s, as the decimal mark option says", what, markSentence(dec))
 		}
 	case r.opt.DecimalMark != 0:
-		r.fail(-1, c, "", ErrOption, fmt.Sprintf("%q cannot be a decimal mark; choose a point or a comma", string(rune(r.opt.DecimalMark))))
-		return nil
+		r.fail(-1, cols[0], "", ErrOption, fmt.Sprintf("%q cannot be a decimal mark; choose a point or a comma", string(rune(r.opt.DecimalMark))))
+		return 0, false
 	case count[evDot] > 0 && count[evComma] > 0:
-		late, early := max(first[evDot], first[evComma]), min(first[evDot], first[evComma])
-		r.fail(late, c, cellAt(late), ErrDecimalMark, fmt.Sprintf("%s writes the decimal mark as %s, but line %d (%s) writes it as %s; write every number in the column the same way",
-			quoteCell(cellAt(late)), markWord(late == first[evComma]), r.lineOf(early), quoteCell(cellAt(early)), markWord(early == first[evComma])))
-		return nil
+		late, early := first[evDot], first[evComma]
+		lateComma := false
+		if late.i < early.i || late.i == early.i && late.c < early.c {
+			late, early = early, late
+			lateComma = true
+		}
+		r.fail(late.i, late.c, raw(late), ErrDecimalMark, fmt.Sprintf("%s writes the decimal mark as %s, but line %d (%s) writes it as %s; write every number in the %s the same way",
+			text(late), markWord(lateComma), r.lineOf(early.i), text(early), markWord(!lateComma), strings.Fields(what)[0]))
+		return 0, false
 	case count[evComma] > 0:
 		dec = ','
-		r.decide("column %q: %s, decided from all %d numbers, such as %s on line %d", name, markSentence(dec),
-			count[evNone]+count[evComma]+count[evAmbiguous], quoteCell(cellAt(first[evComma])), r.lineOf(first[evComma]))
+		r.decide("%s: %s, decided from all %d numbers, such as %s on line %d", what, markSentence(dec),
+			numbers, text(first[evComma]), r.lineOf(first[evComma].i))
 	case count[evDot] > 0:
-		if count[evAmbiguous] > 0 || hasComma(cellAt(first[evDot])) {
-			r.decide("column %q: %s, decided from all %d numbers, such as %s on line %d", name, markSentence('.'),
-				count[evNone]+count[evDot]+count[evAmbiguous], quoteCell(cellAt(first[evDot])), r.lineOf(first[evDot]))
+		if count[evAmbiguous] > 0 || strings.Contains(raw(first[evDot]), ",") {
+			r.decide("%s: %s, decided from all %d numbers, such as %s on line %d", what, markSentence('.'),
+				numbers, text(first[evDot]), r.lineOf(first[evDot].i))
 		}
 	case count[evAmbiguous] > 0 && r.decimal != 0:
 		dec = r.decimal
-		r.decide("column %q: no number settles the decimal mark, so it follows column %q: %s", name, r.decCol, markSentence(dec))
+		r.decide("%s: no number settles the decimal mark, so it follows column %q: %s", what, r.decCol, markSentence(dec))
 	case count[evAmbiguous] > 0:
-		i := first[evAmbiguous]
-		r.fail(i, c, cellAt(i), ErrDecimalMark, fmt.Sprintf("%s could be a whole number with a thousands separator or a number with three decimals, and no cell in the column settles it; set the decimal mark to a point or a comma", quoteCell(cellAt(i))))
-		return nil
+		at := first[evAmbiguous]
+		r.fail(at.i, at.c, raw(at), ErrDecimalMark, fmt.Sprintf("%s could be a whole number with a thousands separator or a number with three decimals, and no cell in the %s settles it; set the decimal mark to a point or a comma",
+			text(at), strings.Fields(what)[0]))
+		return 0, false
 	}
 	if count[evDot]+count[evComma] > 0 && r.decimal == 0 {
 		r.decimal, r.decCol = dec, name
 	}
 	if money > 0 {
-		r.decide("column %q: currency signs in %d %s are left out", name, money, plural(money, "cell", "cells"))
+		r.decide("%s: currency signs in %d %s are left out", what, money, plural(money, "cell", "cells"))
 	}
 	if percent > 0 {
-		r.decide("column %q: percent signs in %d %s are left out, so 12%% reads as 12", name, percent, plural(percent, "cell", "cells"))
+		r.decide("%s: percent signs in %d %s are left out, so 12%% reads as 12", what, percent, plural(percent, "cell", "cells"))
 	}
-	values := make([]float64, len(r.rows))
-	for i, row := range r.rows {
-		b := trimCell(r.t.cell(int(row), c))
-		if ev, ok := quickNumber(b); ok && (dec == '.' || ev == evNone) {
-			v, err := strconv.ParseFloat(string(b), 64)
-			if err == nil {
-				values[i] = v
-				continue
-			}
-		}
-		if isMissing(b, r.opt.Missing) {
-			values[i] = math.NaN()
-			continue
-		}
-		nb := scanNumber(b)
-		v, why := nb.value(dec)
-		if why != "" || (nb.ok && (math.IsInf(v, 0) || math.IsNaN(v))) {
-			r.fail(i, c, string(b), ErrNotNumber, notNumber(b, why, dec, nb))
-			continue
-		}
-		values[i] = v
-	}
-	return values
+	return dec, true
 }
 
 // notNumber writes the message for a cell that is not a number.
@@ -149,13 +173,4 @@ func markSentence(dec byte) string {
 		return "commas are decimal marks and points or spaces group thousands (1.234,5 is one thousand two hundred thirty-four and a half)"
 	}
 	return "points are decimal marks and commas or spaces group thousands (1,234.5 is one thousand two hundred thirty-four and a half)"
-}
-
-func hasComma(s string) bool {
-	for i := 0; i < len(s); i++ {
-		if s[i] == ',' {
-			return true
-		}
-	}
-	return false
 }
