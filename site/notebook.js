@@ -3,7 +3,7 @@
 // The notebook edits text only; running, numbering and formatting are the
 // engine's work.
 
-import { el, svgFragment, engineTable } from "./dom.js";
+import { el, svgFragment, engineTable, engineMarkup } from "./dom.js";
 
 /** Notebook renders session parts and turns edits into change events. */
 export class Notebook {
@@ -72,11 +72,12 @@ export class Notebook {
 
   prose(p, i) {
     const view = el("div", { class: "prose", tabindex: "0", "data-part": i, "aria-label": "Note; press Enter to edit" });
-    for (const para of p.text.split(/\n\s*\n/)) {
-      const t = para.trim();
-      if (!t) continue;
-      const heading = /^(#{1,6})\s+(.*)$/.exec(t);
-      view.append(heading ? el(`h${Math.min(heading[1].length + 1, 6)}`, {}, heading[2]) : el("p", {}, t));
+    if (p.html !== undefined) {
+      // Rendered by the engine (goldmark, raw HTML left out).
+      view.append(engineMarkup(p.html));
+    } else {
+      // Just edited: shown as typed until the engine renders it.
+      view.append(el("p", { class: "pending" }, p.text));
     }
     view.addEventListener("click", () => this.editProse(i));
     return view;
@@ -92,6 +93,7 @@ export class Notebook {
       if (area.value !== this.parts[i].text) {
         const parts = this.clone();
         parts[i].text = area.value;
+        delete parts[i].html;
         this.change(parts, { part: i, line: -1 });
       } else {
         this.render();

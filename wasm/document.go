@@ -16,6 +16,7 @@ type pagePart struct {
 	Kind  string     `json:"kind"`           // "prose", "steps" or "data"
 	Text  string     `json:"text,omitempty"` // prose markdown, or the data block's body
 	Name  string     `json:"name,omitempty"` // file name of a data block
+	HTML  string     `json:"html,omitempty"` // prose rendered for reading; ignored when sent back
 	Lines []pageLine `json:"lines"`          // step lines of a steps block; null for other parts
 }
 
@@ -26,9 +27,11 @@ type pageLine struct {
 	Line int    `json:"line"`
 }
 
-// partsOf splits a session document into the parts the page shows.
+// partsOf splits a session document into the parts the page shows,
+// prose rendered for reading.
 func partsOf(doc *session.Document) []pagePart {
 	out := []pagePart{}
+	md := newProse()
 	lines := doc.StepLines()
 	for i, p := range doc.Parts {
 		switch p.Kind {
@@ -43,7 +46,7 @@ func partsOf(doc *session.Document) []pagePart {
 		case session.Data:
 			out = append(out, pagePart{Kind: "data", Name: p.Name, Text: p.Body})
 		default:
-			out = append(out, pagePart{Kind: "prose", Text: p.Raw})
+			out = append(out, pagePart{Kind: "prose", Text: p.Raw, HTML: proseHTML(md, p.Raw)})
 		}
 	}
 	return out

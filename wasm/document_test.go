@@ -70,3 +70,22 @@ func TestDocumentOfRejectsUnknownParts(t *testing.T) {
 		}
 	}
 }
+
+func TestProseRendered(t *testing.T) {
+	text := "## Patterns\n\nOrders *grow*. <script>alert(1)</script> [link](javascript:alert(1))\n\n```quill\nsplit last=12\n```\n"
+	parts := partsOf(session.Parse(text))
+	if len(parts) == 0 || parts[0].Kind != "prose" {
+		t.Fatalf("parts = %+v, want prose first", parts)
+	}
+	html := parts[0].HTML
+	for _, want := range []string{"<h2>Patterns</h2>", "<em>grow</em>"} {
+		if !strings.Contains(html, want) {
+			t.Errorf("rendered note lacks %s:\n%s", want, html)
+		}
+	}
+	for _, bad := range []string{"<script", "javascript:"} {
+		if strings.Contains(html, bad) {
+			t.Errorf("rendered note carries %s:\n%s", bad, html)
+		}
+	}
+}

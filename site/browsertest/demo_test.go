@@ -28,6 +28,7 @@ func TestDemoPage(t *testing.T) {
 		{"session listed in the rail", `document.querySelectorAll('#sessions li').length`},
 		{"step lines with their verb marked", `document.querySelectorAll('#parts code.line .verb').length`},
 		{"numbered exhibits", `document.querySelectorAll('#parts figure.exhibit h3 .num').length`},
+		{"notes rendered from markdown", `document.querySelectorAll('#parts .prose h2').length`},
 	}
 	for _, c := range checks {
 		if n := eval[int](p, c.expr); n == 0 {
