@@ -13,14 +13,14 @@ import (
 type Dataset struct {
 	Name        string    // the file name as given to Read
 	Fingerprint string    // see [Fingerprint]
-	Layout      Layout    // wide or long
+	Layout      Layout    // wide, long or across
 	Frequency   Frequency // frequency of every series in the file
 	Columns     []string  // column names in file order (made up as "column 3" without a header)
 	DateColumn  string    // the column holding periods; "" when positions were counted by row
-	SeriesKey   string    // the column telling series apart (long layout); "" in the wide layout
+	SeriesKey   string    // the column telling series apart (long layout) or naming them (across); "" in the wide layout
 	Rows        int       // data rows read (after [ReadOptions.Only])
-	Series      []*Series // wide: one per value column; long: one per key and value column, in order of appearance
-	Labels      [][]Label // long layout: Labels[i] holds the other text columns of Series[i]
+	Series      []*Series // wide: one per value column; long: one per key and value column; across: one per row; in order of appearance
+	Labels      [][]Label // long and across layouts: Labels[i] holds the other text columns of Series[i]
 	Decisions   []string  // every decision taken while reading, one plain sentence each
 	Problems    []Problem // gaps, missing values, duplicates and out-of-order rows, by series, then period, then line
 	Changes     []Change  // every change made by sorting, combining duplicates or filling, in order

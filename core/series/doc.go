@@ -26,7 +26,7 @@
 // [ReadOptions] says otherwise: the delimiter (comma, semicolon, tab,
 // vertical bar), whether the first line holds column names, the period
 // column and how its dates are written, the frequency, the value columns,
-// each column's decimal mark, and whether the file is wide or long:
+// each column's decimal mark, and whether the file is wide, long or across:
 //
 //	month,units,returns            wide: one series per value column
 //	2024-01,1 204,12
@@ -36,6 +36,10 @@
 //	Harbour;2024-01;412,5
 //	Harbour;2024-02;398
 //	Old Town;2024-01;377
+//
+//	shop,2024-01,2024-02           across: one series per row,
+//	Harbour,412.5,398              one column per period
+//	Old Town,377,360
 //
 // Numbers may carry a decimal comma, thousands separators (1,234.5;
 // 1.234,5; 1 234,5), currency signs, percent signs and negatives in

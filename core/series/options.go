@@ -20,7 +20,8 @@ type ReadOptions struct {
 	// Series names the column that tells series apart in the long layout
 	// (series, period, value columns); setting it chooses the long layout.
 	Series string
-	// Layout forces the wide or the long layout; the zero value detects it.
+	// Layout forces the wide, long or across layout; the zero value
+	// detects it.
 	Layout Layout
 	// DateOrder says how dates like 01/02/2024 are written; the zero value
 	// decides from the column and asks when no value settles it.
@@ -82,15 +83,18 @@ const (
 	DetectLayout Layout = iota // decide from the file
 	Wide                       // one series per value column
 	Long                       // series, period and value columns; one row per series and period
+	Across                     // one row per series, one column per period named by the period
 )
 
-// String returns "wide" or "long" ("" when not set).
+// String returns "wide", "long" or "across" ("" when not set).
 func (l Layout) String() string {
 	switch l {
 	case Wide:
 		return "wide"
 	case Long:
 		return "long"
+	case Across:
+		return "across"
 	}
 	return ""
 }

@@ -84,6 +84,14 @@ func (r *reader) read(data []byte) {
 		r.fail(-1, -1, "", ErrEmpty, "the file holds a title but no table; load a file with a header line and rows of data")
 		return
 	}
+	if first, end, ok := r.acrossColumns(); ok && (r.opt.Layout == DetectLayout || r.opt.Layout == Across) && r.opt.Header != NoHeader {
+		r.readAcross(first, end)
+		return
+	}
+	if r.opt.Layout == Across {
+		r.fail(-1, -1, "", ErrOption, "the across layout needs column names that are periods after a label column, as in \"shop,2024-01,2024-02\"; none were found on the first line")
+		return
+	}
 	header := r.opt.Header == WithHeader || r.opt.Header == DetectHeader && r.headerLooksLikeNames()
 	r.nameColumns(header)
 	if !r.dataRows(header) {
@@ -228,6 +236,11 @@ func (r *reader) fail(i, c int, cell string, cause error, msg string) {
 		}
 	}
 	r.add(e)
+}
+
+// failHeader records an error at column c of the line of column names.
+func (r *reader) failHeader(c int, cause error, msg string) {
+	r.add(&ParseError{Line: int(r.t.line[0]), Column: c + 1, Name: r.names[c], Cell: r.names[c], Err: cause, Msg: msg})
 }
 
 // failLine records an error for a whole line.
