@@ -110,6 +110,14 @@ func (r *reader) dateColumn(c int) (Frequency, []int) {
 	if r.failed() {
 		return NoFrequency, nil
 	}
+	if written == Index && r.opt.Frequency != Index && hinted(name, serialNames) && serialDays(ords) {
+		r.decide("column %q holds numbers like %d, read as spreadsheet day numbers (%d is %s); if they are positions, set the frequency to index",
+			name, ords[0], ords[0], Period{Day, ords[0] - serialEpoch})
+		for i := range ords {
+			ords[i] -= serialEpoch
+		}
+		written = Day
+	}
 	freq := r.frequency(c, written, ords)
 	if times > 0 {
 		r.decide("%d dates in column %q carry a time of day; the time is dropped and each row counts for the %s its date falls in", times, name, freq)
@@ -213,4 +221,24 @@ func ordinalOf(d dateCell, order DateOrder) (int, string) {
 		return y, ""
 	}
 	return 0, "its shape is not known"
+}
+
+// serialEpoch is the spreadsheet day number of 1970-01-01 in the 1900 date
+// system (day 1 is 1900-01-01, counting a 29 February 1900 that never was;
+// common practice of spreadsheet exports).
+const serialEpoch = 25569
+
+// serialNames are column names under which whole numbers are taken for
+// spreadsheet day numbers.
+var serialNames = []string{"date", "day", "datetime", "timestamp"}
+
+// serialDays reports whether every number lies between 20000 and 80000,
+// spreadsheet day numbers for 1954 to 2119.
+func serialDays(ords []int) bool {
+	for _, n := range ords {
+		if n < 20000 || n > 80000 {
+			return false
+		}
+	}
+	return len(ords) > 0
 }

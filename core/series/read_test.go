@@ -176,6 +176,8 @@ var readTests = []struct {
 		want: "across year\nNorth 2019 [1 2 missing 4]"},
 	{name: "wide layout with years as column names", in: "month,2023,2024\n2024-01,5,6\n2024-02,7,8\n",
 		want: "wide month\n2023 2024-01 [5 7]\n2024 2024-01 [6 8]"},
+	{name: "spreadsheet day numbers", in: "date,units\n45292,1\n45323,2\n45352,3\n", // 45292 is 2024-01-01 (hand calculation: 25569 + 19723 days)
+		want: "wide month\nunits 2024-01 [1 2 3]", decision: "spreadsheet day numbers"},
 	{name: "ISO week 53", in: "week,units\n2020-W52,1\n2020-W53,2\n2021-W01,3\n",
 		want: "wide week\nunits 2020-W52 [1 2 3]"},
 }
