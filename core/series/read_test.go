@@ -178,6 +178,8 @@ var readTests = []struct {
 		want: "wide month\n2023 2024-01 [5 7]\n2024 2024-01 [6 8]"},
 	{name: "spreadsheet day numbers", in: "date,units\n45292,1\n45323,2\n45352,3\n", // 45292 is 2024-01-01 (hand calculation: 25569 + 19723 days)
 		want: "wide month\nunits 2024-01 [1 2 3]", decision: "spreadsheet day numbers"},
+	{name: "year column beside a full month column", in: "year,month,units\n2024,2024-01,5\n2024,2024-02,6\n",
+		want: "wide month\nunits 2024-01 [5 6]"},
 	{name: "ISO week 53", in: "week,units\n2020-W52,1\n2020-W53,2\n2021-W01,3\n",
 		want: "wide week\nunits 2020-W52 [1 2 3]"},
 }

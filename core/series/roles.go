@@ -38,7 +38,7 @@ func (r *reader) chooseRoles(st []colStats) (roles, bool) {
 			switch {
 			case hinted(sname, quarterNames) && (whole(s) || st[s].shapes[shapeNone] == st[s].present()):
 				ro.year, ro.sub, ro.subOf = y, s, Quarter
-			case hinted(sname, monthNames2) && st[s].present() > 0:
+			case hinted(sname, monthNames2) && st[s].present() > 0 && st[s].dated() == 0:
 				ro.year, ro.sub, ro.subOf = y, s, Month
 			default:
 				continue
