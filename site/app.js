@@ -10,6 +10,7 @@ import { showHelp } from "./help.js";
 import { attachFiles, attachPaste, showPreview } from "./data.js";
 import { memoText, previewMemo, memoBlob } from "./memo.js";
 import { assetBytes, assetText, engineResponse } from "./assets.js";
+import { sharedSteps, shareLink, download, fileName } from "./files.js";
 
 const $ = (id) => document.getElementById(id);
 const root = document.documentElement;
@@ -157,39 +158,10 @@ async function loadDemo() {
   return { text, files: files.filter((f) => f.bytes) };
 }
 
-/** sharedSteps returns the steps carried by a share link, or null. */
-function sharedSteps() {
-  const m = /^#steps=(.*)$/s.exec(location.hash);
-  if (!m) return null;
-  try {
-    return decodeURIComponent(m[1]);
-  } catch {
-    return null;
-  }
-}
-
 /** openShared starts a new session from the steps a link carried. */
 async function openShared(steps) {
   await newSession("Shared steps", "```quill\n" + steps + "\n```\n");
   setStatus("Opened steps from a link. It carried no data: attach the files the load steps name.");
-}
-
-function shareLink() {
-  const steps = session.parts.filter((p) => p.kind === "steps").map((p) => p.lines.map((l) => l.text).join("\n")).join("\n");
-  return `${location.origin}${location.pathname}#steps=${encodeURIComponent(steps)}`;
-}
-
-function download(name, type, body) {
-  const url = URL.createObjectURL(new Blob([body], { type }));
-  const a = el("a", { href: url, download: name });
-  document.body.append(a);
-  a.click();
-  a.remove();
-  setTimeout(() => URL.revokeObjectURL(url), 1000);
-}
-
-function fileName(title, ext) {
-  return (title || "session").replace(/[^\p{L}\p{N} _-]+/gu, "").trim().replace(/\s+/g, "-").toLowerCase() + ext;
 }
 
 function wire() {
@@ -251,7 +223,7 @@ function wire() {
     }
   });
   $("share").addEventListener("click", async () => {
-    const link = shareLink();
+    const link = shareLink(session.parts);
     const box = $("share-link");
     box.value = link;
     box.hidden = false;
