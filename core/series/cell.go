@@ -40,6 +40,14 @@ func isMissing(b []byte, extra []string) bool {
 
 // trimCell trims ASCII spaces, tabs and no-break spaces from both ends.
 func trimCell(b []byte) []byte {
+	if n := len(b); n == 0 || b[0] > ' ' && b[0] != 0xC2 && b[n-1] > ' ' && b[n-1] != 0xA0 {
+		return b
+	}
+	return trimSpaces(b)
+}
+
+// trimSpaces is trimCell for cells that may start or end with a space.
+func trimSpaces(b []byte) []byte {
 	for len(b) > 0 {
 		if b[0] == ' ' || b[0] == '\t' {
 			b = b[1:]
