@@ -4,7 +4,11 @@ import (
 	"net/url"
 	"os"
 	"path/filepath"
+	"strings"
 	"testing"
+
+	cdppage "github.com/chromedp/cdproto/page"
+	"github.com/chromedp/chromedp"
 )
 
 // checkDemo asserts that the demo session rendered its charts and tables.
@@ -43,5 +47,24 @@ func TestBundle(t *testing.T) {
 	p.screenshot("bundle-from-disk")
 	checkDemo(t, p)
 	t.Logf("engine runs in %q; storage: %q", eval[string](p, `document.documentElement.dataset.engine`), eval[string](p, `document.getElementById('storage-note').textContent`))
+	p.checkClean(ready)
+}
+
+// TestWithoutWorkers opens the page in a browser that offers no Web
+// Workers: the engine runs on the page itself, the page says so, and the
+// demo still renders.
+func TestWithoutWorkers(t *testing.T) {
+	p := openSite(t)
+	if _, err := chromedp.Call(p.ctx, cdppage.AddScriptToEvaluateOnNewDocument, cdppage.AddScriptToEvaluateOnNewDocumentParams{Source: "delete globalThis.Worker;"}); err != nil {
+		t.Fatalf("removing workers: %v", err)
+	}
+	ready := p.open("")
+	if mode := eval[string](p, `document.documentElement.dataset.engine`); mode != "page" {
+		t.Errorf("without workers the engine runs in %q, want the page", mode)
+	}
+	if status := eval[string](p, `document.getElementById('status').textContent`); !strings.Contains(status, "no worker") {
+		t.Errorf("the status %q does not say that no worker could start", status)
+	}
+	checkDemo(t, p)
 	p.checkClean(ready)
 }
