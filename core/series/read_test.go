@@ -180,6 +180,14 @@ var readTests = []struct {
 		want: "wide month\nunits 2024-01 [1 2 3]", decision: "spreadsheet day numbers"},
 	{name: "year column beside a full month column", in: "year,month,units\n2024,2024-01,5\n2024,2024-02,6\n",
 		want: "wide month\nunits 2024-01 [5 6]"},
+	{name: "days mapped to ISO weeks by option", in: "date,units\n2024-01-01,1\n2024-01-07,2\n2024-01-08,4\n", opt: ReadOptions{Frequency: Week, Duplicates: Sum},
+		want: "wide week\nunits 2024-W01 [3 4]"}, // 1 and 7 January 2024 are the Monday and Sunday of 2024-W01
+	{name: "months mapped to quarters by option", in: "month,units\n2024-01,1\n2024-02,2\n2024-04,4\n", opt: ReadOptions{Frequency: Quarter, Duplicates: Mean},
+		want: "wide quarter\nunits 2024-Q1 [1.5 4]"},
+	{name: "quarters mapped to years by option", in: "quarter,units\n2023-Q4,1\n2024-Q1,2\n2024-Q2,3\n", opt: ReadOptions{Frequency: Year, Duplicates: Sum},
+		want: "wide year\nunits 2023 [1 5]"},
+	{name: "Sunday dates are weeks", in: "week ending,units\n2024-01-07,1\n2024-01-14,2\n", opt: ReadOptions{Date: "week ending"},
+		want: "wide week\nunits 2024-W01 [1 2]", decision: "fall on a Sunday"},
 	{name: "ISO week 53", in: "week,units\n2020-W52,1\n2020-W53,2\n2021-W01,3\n",
 		want: "wide week\nunits 2020-W52 [1 2 3]"},
 }
