@@ -7,7 +7,7 @@ import { start, call, stop, mode, onBusy, EngineError } from "./engine.js";
 import { el } from "./dom.js";
 import { Notebook } from "./notebook.js";
 import { showHelp } from "./help.js";
-import { attachFiles, attachPaste, showPreview } from "./data.js";
+import { attachFiles, attachPaste, showPreview, onAddSteps } from "./data.js";
 import { memoText, previewMemo, memoBlob } from "./memo.js";
 import { assetBytes, assetText, engineResponse } from "./assets.js";
 import { sharedSteps, shareLink, download, fileName } from "./files.js";
@@ -165,6 +165,7 @@ async function openShared(steps) {
 }
 
 function wire() {
+  onAddSteps((lines) => notebook.appendSteps(lines));
   $("doc-title").addEventListener("change", () => { session.title = $("doc-title").value; scheduleSave(); });
   $("add-step").addEventListener("click", () => notebook.addStep());
   $("run-all").addEventListener("click", () => runAndSave(notebook.parts));

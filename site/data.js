@@ -5,6 +5,24 @@
 import { call, EngineError } from "./engine.js";
 import { el, svgFragment, figureTable } from "./dom.js";
 
+/** addSteps is set by the page: it appends step lines to the session. */
+let addSteps = () => {};
+
+/** onAddSteps sets the function that appends step lines to the session. */
+export function onAddSteps(fn) {
+  addSteps = fn;
+}
+
+function useButton(label, lines) {
+  return el("button", {
+    type: "button",
+    onclick: () => {
+      addSteps(lines);
+      document.getElementById("preview-dialog").close();
+    },
+  }, label, " ", el("code", {}, lines.join(" · ")));
+}
+
 function status(text, problem = false) {
   const s = document.getElementById("status");
   s.textContent = text;
@@ -67,8 +85,12 @@ function render(p, name, err) {
         el("ul", { class: "problems" }, ...p.problems.map((x) => el("li", {}, x.text))));
     }
     if (p.notStored) nodes.push(el("p", { class: "msg warning" }, p.notStored));
+    if (p.bakeoff && p.bakeoff.length > 0) {
+      nodes.push(el("p", {}, useButton("Compare methods on every series:", p.bakeoff)));
+    }
     for (const s of p.series.slice(0, 6)) {
-      nodes.push(el("h3", {}, `${s.name}: ${s.count} values, ${s.first} to ${s.last}`), svgFragment(s.chart),
+      nodes.push(el("h3", {}, `${s.name}: ${s.count} values, ${s.first} to ${s.last}`),
+        el("p", {}, useButton("Add to the session:", [s.step])), svgFragment(s.chart),
         figureTable([p.dateColumn || "period", s.name], s.head, "First rows"));
     }
     if (p.series.length > 6) nodes.push(el("p", { class: "hint" }, `…and ${p.series.length - 6} more series.`));

@@ -292,6 +292,13 @@ export class Notebook {
     this.editStep(i, parts[i].lines.length - 1);
   }
 
+  /** appendSteps adds a block of step lines at the end and runs it. */
+  appendSteps(lines) {
+    const parts = this.clone();
+    parts.push({ kind: "steps", lines: lines.map((text) => ({ text, line: 0 })) });
+    this.change(parts, null);
+  }
+
   addNote() {
     const parts = this.clone();
     parts.push({ kind: "prose", text: "A note for the memo." });

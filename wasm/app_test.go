@@ -44,6 +44,12 @@ func TestAttachAndExport(t *testing.T) {
 	if len(p.Series) != 1 || p.Series[0].Name != "units" || len(p.Series[0].Head) != 6 || !strings.HasPrefix(p.Series[0].Chart, "<svg") {
 		t.Fatalf("preview of a six-month file: %+v", p)
 	}
+	if got, want := p.Series[0].Step, "load orders.csv value=units date=month"; got != want {
+		t.Errorf("load step for the series: %q, want %q", got, want)
+	}
+	if len(p.Bakeoff) != 0 {
+		t.Errorf("a one-series file offers a bake-off: %q", p.Bakeoff)
+	}
 	if list, _ := a.sets.List(); len(list) != 1 || list[0].Name != "orders.csv" {
 		t.Errorf("the attached file is not stored: %+v", list)
 	}
@@ -79,6 +85,30 @@ func TestAttachAndExport(t *testing.T) {
 	missing := `[{"kind":"steps","lines":[{"text":"load other.csv"}]}]`
 	if _, err := a.exportSession([]js.Value{js.ValueOf(missing), js.ValueOf(true)}); err == nil || !strings.Contains(err.Error(), "not attached") {
 		t.Errorf("exporting with data a session whose file is missing: %v, want a 'not attached' error", err)
+	}
+}
+
+func TestLongFileSteps(t *testing.T) {
+	a := testApp()
+	csv := "shop,month,units\n"
+	for _, shop := range []string{"Harbour Row", "Old Mill"} {
+		for m := 1; m <= 6; m++ {
+			csv += fmt.Sprintf("%s,2024-%02d,%d\n", shop, m, 10+m)
+		}
+	}
+	v, err := a.attach([]js.Value{bytesValue(csv), js.ValueOf("shops.csv")})
+	if err != nil {
+		t.Fatal(err)
+	}
+	p := v.(preview)
+	if len(p.Series) != 2 {
+		t.Fatalf("%d series, want 2", len(p.Series))
+	}
+	if got, want := p.Series[0].Step, `load shops.csv series="Harbour Row" date=month`; got != want {
+		t.Errorf("load step of the first shop: %q, want %q", got, want)
+	}
+	if got, want := strings.Join(p.Bakeoff, " | "), "load shops.csv date=month | bakeoff"; got != want {
+		t.Errorf("bake-off steps: %q, want %q", got, want)
 	}
 }
 

@@ -9,6 +9,7 @@ import (
 	"quillcast/core/chart"
 	"quillcast/core/format"
 	"quillcast/core/series"
+	"quillcast/core/steps"
 )
 
 // headRows is how many rows of each series the preview shows.
@@ -27,7 +28,10 @@ type preview struct {
 	Problems   []problem       `json:"problems"`
 	Changes    []string        `json:"changes"`
 	Series     []seriesPreview `json:"series"`
-	NotStored  string          `json:"notStored,omitempty"` // why the file was not kept in the browser
+	// Bakeoff holds the step lines that compare methods on every series
+	// of a file holding several; empty otherwise.
+	Bakeoff   []string `json:"bakeoff,omitempty"`
+	NotStored string   `json:"notStored,omitempty"` // why the file was not kept in the browser
 }
 
 // problem is one [series.Problem] as the page lists it.
@@ -49,6 +53,7 @@ type seriesPreview struct {
 	Season int        `json:"season"`
 	Chart  string     `json:"chart"`
 	Head   [][]string `json:"head"` // rows of [period, value]
+	Step   string     `json:"step"` // the load step that picks this series
 }
 
 // attach(bytes Uint8Array, name string) reads a data file and keeps it under
@@ -107,9 +112,33 @@ func previewOf(ds *series.Dataset) preview {
 		p.Changes = append(p.Changes, c.String())
 	}
 	for _, s := range ds.Series {
-		p.Series = append(p.Series, seriesPreviewOf(s, ds.DateColumn))
+		sp := seriesPreviewOf(s, ds.DateColumn)
+		sp.Step = loadStep(ds, s.Name, ds.Layout == series.Long)
+		p.Series = append(p.Series, sp)
+	}
+	if len(ds.Series) > 1 {
+		p.Bakeoff = []string{loadStep(ds, "", false), (&steps.Step{Verb: "bakeoff"}).Canonical()}
 	}
 	return p
+}
+
+// loadStep writes the load step for a dataset: with series=NAME for one
+// series of a long file, value=NAME for one column of a wide file, and
+// neither when name is empty.
+func loadStep(ds *series.Dataset, name string, long bool) string {
+	st := &steps.Step{Verb: "load", Subject: ds.Name}
+	opt := func(k, v string) { st.Options = append(st.Options, steps.Option{Key: k, Value: steps.Value{Raw: v}}) }
+	switch {
+	case name == "":
+	case long:
+		opt("series", name)
+	default:
+		opt("value", name)
+	}
+	if ds.DateColumn != "" {
+		opt("date", ds.DateColumn)
+	}
+	return st.Canonical()
 }
 
 // seriesPreviewOf charts one series and formats its first rows.

@@ -89,7 +89,10 @@ func TestNotebook(t *testing.T) {
 	waitFor(p, "the attached dataset in the rail", `[...document.querySelectorAll('#datasets li .link')].some(n => n.textContent === 'harbour-weekly.csv')`)
 	waitFor(p, "the preview", `document.getElementById('preview-dialog').open && document.querySelectorAll('#preview-body svg.qc').length > 0`)
 	p.screenshot("attached-file")
-	p.run("closing the preview", 10*time.Second, chromedp.Click(chromedp.CSS("#preview-dialog button")))
+	// The preview offers the load step for the series; using it adds the
+	// step to the session and runs it.
+	p.run("adding the load step", 10*time.Second, chromedp.Click(chromedp.CSS("#preview-body button")))
+	waitFor(p, "the new load step", `[...document.querySelectorAll('#parts code.line')].some(n => n.textContent === 'load harbour-weekly.csv value=orders date=week')`)
 	p.checkClean(ready)
 
 	// Share: the link carries the steps only and opens as a new session.
