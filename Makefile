@@ -47,7 +47,7 @@ build:
 	(cd $(SITE)/demo && ls *.csv 2>/dev/null || true) > $(SITE)/demo/files.txt
 
 ## test: every test of the project
-test: vet test-host test-wasm
+test: vet test-wasm test-host
 
 vet:
 	$(GO) vet ./...
