@@ -1,6 +1,9 @@
 package browsertest
 
 import (
+	"os"
+	"path/filepath"
+	"strings"
 	"testing"
 	"time"
 
@@ -65,5 +68,35 @@ func TestKeyboard(t *testing.T) {
 	}
 	t.Logf("message under the misspelt step: %s", msg)
 	p.screenshot("error-marker")
+	p.checkClean(ready)
+}
+
+// TestSessionFileRoundTrip saves the demo session as a file with its data
+// inside and opens that file again as a new session whose steps run on
+// the embedded data; then undoes an edit with Ctrl+Z.
+func TestSessionFileRoundTrip(t *testing.T) {
+	p := openSite(t)
+	ready := p.open("")
+	// Ask the engine for exactly what "Save session file" writes.
+	text := eval[string](p, `(async () => {
+		const parts = JSON.parse(await globalThis.quillcast.run(JSON.stringify([{kind: "steps", lines: [{text: "load wickery-monthly-orders.csv value=units date=month"}, {text: "split last=12"}]}]))).value.parts;
+		return JSON.parse(await globalThis.quillcast.exportSession(JSON.stringify(parts), true)).value;
+	})()`)
+	if !strings.Contains(text, "```quill-data wickery-monthly-orders.csv") {
+		t.Fatalf("the session file lacks its data block:\n%.400s", text)
+	}
+	file := filepath.Join(t.TempDir(), "orders-review.md")
+	if err := os.WriteFile(file, []byte(text), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	p.run("opening the session file", 20*time.Second, chromedp.SetUploadFiles(chromedp.CSS("#import-input"), []string{file}))
+	waitFor(p, "the imported session", `document.getElementById('doc-title').value === 'orders-review' && document.querySelectorAll('#parts figure.exhibit').length > 0`)
+
+	// Undo: delete the split step with the Delete key, then Ctrl+Z brings it back.
+	sel := stepSelector(p, "split last=12")
+	p.run("deleting a step", 10*time.Second, chromedp.Focus(chromedp.CSS(sel)), chromedp.KeyEvent(kb.Delete))
+	waitFor(p, "the step gone", `![...document.querySelectorAll('#parts code.line')].some(n => n.textContent === 'split last=12')`)
+	p.run("undoing", 10*time.Second, chromedp.KeyEvent("z", chromedp.KeyModifiers(chromedp.ModifierCtrl)))
+	waitFor(p, "the step back", `[...document.querySelectorAll('#parts code.line')].some(n => n.textContent === 'split last=12')`)
 	p.checkClean(ready)
 }
