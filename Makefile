@@ -92,9 +92,22 @@ fuzz:
 		done; \
 	done
 
-## bench: every benchmark of the engine
-bench:
-	$(GO) test -run '^$$' -bench . -benchtime $(BENCHTIME) ./core/...
+## bench: measure speed and size side by side and print one table (see
+## core/cmd/benchtable; the table is also written to build/bench/table.md)
+bench: dist bundle bench-deps
+	$(WASM_ENV) $(GO) build -tags bench $(WASM_OPTS) -o $(BUILD)/bench/quillcast-bench.wasm ./wasm
+	$(GO) run ./core/cmd/benchtable -prepare -out $(BUILD)/bench
+	QUILLCAST_BENCH=1 QUILLCAST_BENCH_DIR=$(CURDIR)/$(BUILD)/bench $(GO) test -count=1 -timeout 30m -run '^TestBenchPage$$' ./site/browsertest
+	$(GO) run ./core/cmd/benchtable -out $(BUILD)/bench
+
+# bench-deps installs what the bench table compares with, from Debian, when missing.
+bench-deps:
+	@missing=""; \
+	/usr/bin/python3 -c 'import numpy' 2>/dev/null || missing="$$missing python3-numpy"; \
+	/usr/bin/python3 -c 'import statsmodels' 2>/dev/null || missing="$$missing python3-statsmodels"; \
+	command -v brotli >/dev/null || missing="$$missing brotli"; \
+	test -x /usr/bin/chromium || missing="$$missing chromium"; \
+	if [ -n "$$missing" ]; then apt-get install -y $$missing; fi
 
 clean:
 	rm -rf $(BUILD)
