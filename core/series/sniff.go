@@ -3,6 +3,7 @@ package series
 import (
 	"bytes"
 	"fmt"
+	"unicode/utf8"
 )
 
 // This file looks at the raw bytes before anything is split: size,
@@ -55,10 +56,28 @@ func checkBytes(data []byte, limit int) ([]byte, error) {
 		return nil, &ParseError{Line: 1 + countBreaks(data[:i]), Err: ErrEncoding,
 			Msg: "the file holds binary data, not text; export the data as CSV or TSV and load that"}
 	}
+	if !utf8.Valid(data) {
+		i := invalidUTF8(data)
+		return nil, &ParseError{Line: 1 + countBreaks(data[:i]), Err: ErrEncoding,
+			Msg: "the file is not UTF-8 text (it may be saved in an older encoding such as Windows-1252); save it again as UTF-8 (often called \"CSV UTF-8\") and load it again"}
+	}
 	if len(bytes.TrimSpace(data)) == 0 {
 		return nil, &ParseError{Err: ErrEmpty, Msg: "the file is empty; load a file with a header line and at least one row of data"}
 	}
 	return data, nil
+}
+
+// invalidUTF8 returns the offset of the first byte of data that does not
+// start valid UTF-8, or len(data).
+func invalidUTF8(data []byte) int {
+	for i := 0; i < len(data); {
+		r, size := utf8.DecodeRune(data[i:])
+		if r == utf8.RuneError && size <= 1 {
+			return i
+		}
+		i += size
+	}
+	return len(data)
 }
 
 // sizeText writes a byte count for people: "312 bytes", "4.2 MB".
