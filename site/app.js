@@ -107,6 +107,11 @@ async function save() {
         } }, "Keep mine as a copy"));
       return;
     }
+    if (err instanceof EngineError && err.failure.code === "quota") {
+      banner(`Not saved: ${err.message}.`,
+        el("button", { type: "button", onclick: () => { banner(""); $("export-session").click(); } }, "Save the session as a file"));
+      return;
+    }
     setStatus(`Not saved: ${explain(err)}. Use "Save session file" to keep your work.`, true);
   }
 }

@@ -127,6 +127,7 @@ func TestFailureData(t *testing.T) {
 	}{
 		{"step error", &steps.Error{Step: 2, Line: 7, Column: 14, Msg: "unknown option"}, Failure{Message: "line 7, column 14: unknown option", Step: 2, Line: 7, Column: 14}},
 		{"conflict", fmt.Errorf("%w (version 3 there, 2 here)", store.ErrConflict), Failure{Message: store.ErrConflict.Error() + " (version 3 there, 2 here)", Code: "conflict"}},
+		{"quota", fmt.Errorf("%w (QuotaExceededError)", store.ErrQuota), Failure{Message: store.ErrQuota.Error() + " (QuotaExceededError)", Code: "quota"}},
 		{"plain", errors.New("no such file"), Failure{Message: "no such file"}},
 	}
 	for _, tc := range tests {

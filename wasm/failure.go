@@ -15,8 +15,11 @@ import (
 // page can mark the spot. Line and Column count from 1; 0 means unknown.
 // Problems lists every error when one answer found several.
 type Failure struct {
-	Message  string    `json:"message"`
-	Code     string    `json:"code,omitempty"` // "conflict" when another tab saved a newer version
+	Message string `json:"message"`
+	// Code names a failure the page answers with an offer: "conflict" when
+	// another tab saved a newer version, "quota" when the browser's storage
+	// is full (the page offers to save the session as a file).
+	Code     string    `json:"code,omitempty"`
 	Step     int       `json:"step,omitempty"`
 	Line     int       `json:"line,omitempty"`
 	Column   int       `json:"column,omitempty"`
@@ -28,6 +31,9 @@ func failureOf(err error) Failure {
 	f := Failure{Message: err.Error()}
 	if errors.Is(err, store.ErrConflict) {
 		f.Code = "conflict"
+	}
+	if errors.Is(err, store.ErrQuota) {
+		f.Code = "quota"
 	}
 	var se *steps.Error
 	if errors.As(err, &se) {

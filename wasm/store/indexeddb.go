@@ -3,9 +3,12 @@
 package store
 
 import (
-	"errors"
+	"context"
 	"fmt"
+	"slices"
 	"syscall/js"
+
+	"github.com/hack-pad/go-indexeddb/idb"
 )
 
 // dbName and dbVersion name the page's database and its layout. Raise
@@ -15,165 +18,139 @@ const (
 	dbVersion = 1
 )
 
-// IndexedDB is a [Backend] in the browser's IndexedDB. Values are kept as
-// text. Every method blocks until the browser answers, so call them from a
-// goroutine.
+// IndexedDB is a [Backend] in the browser's IndexedDB, through
+// github.com/hack-pad/go-indexeddb. Values are kept as text. Every method
+// waits for the browser's answer, so call them from a goroutine, never from
+// a JavaScript callback.
 type IndexedDB struct {
-	db js.Value
-	// onClose is called when another tab upgrades the database and this
-	// connection had to close; the page should ask for a reload.
-	onClose func()
+	db *idb.Database
 }
 
 // OpenIndexedDB opens (creating or upgrading as needed) the page's database.
-// onClose is called if a newer page in another tab upgrades the database and
-// this connection closes. It fails with a plain explanation when the browser
-// has no IndexedDB (some private windows) or another tab blocks the upgrade.
+// It must be called from a goroutine.
+//
+// onClose is called when a newer page in another tab upgrades the database:
+// this connection closes at once so the upgrade is not held up, and the page
+// should ask for a reload. OpenIndexedDB fails with [ErrUnavailable] when the
+// browser offers no IndexedDB here (some private windows, storage turned
+// off) and with [ErrBlocked] when another tab holds the database open with an
+// older layout and does not let go.
 func OpenIndexedDB(onClose func()) (*IndexedDB, error) {
-	factory := js.Global().Get("indexedDB")
-	if factory.Type() != js.TypeObject {
-		return nil, errors.New("this browser offers no IndexedDB storage here (a private window?)")
+	raw := js.Global().Get("indexedDB")
+	if raw.Type() != js.TypeObject {
+		return nil, ErrUnavailable
 	}
-	req, err := call(factory, "open", dbName, dbVersion)
+	blocked := make(chan struct{}, 1)
+	factory, release := watchBlocked(raw, blocked)
+	defer release()
+	f, err := idb.WrapFactory(factory)
 	if err != nil {
-		return nil, fmt.Errorf("the browser refused to open storage: %w", err)
+		return nil, unavailable(err)
 	}
-	done := make(chan error, 1)
-	var funcs []js.Func
-	on := func(event string, f func(js.Value)) {
-		fn := js.FuncOf(func(this js.Value, args []js.Value) any { f(req); return nil })
-		funcs = append(funcs, fn)
-		req.Set("on"+event, fn)
-	}
-	on("upgradeneeded", upgrade)
-	on("success", func(js.Value) { done <- nil })
-	on("error", func(r js.Value) { done <- domError(r.Get("error")) })
-	on("blocked", func(js.Value) {
-		done <- errors.New("another Quillcast tab is using an older layout of the stored data; close the other tabs and reload")
-	})
-	err = <-done
-	req.Set("onupgradeneeded", js.Null())
-	req.Set("onsuccess", js.Null())
-	req.Set("onerror", js.Null())
-	req.Set("onblocked", js.Null())
-	for _, f := range funcs {
-		f.Release()
-	}
+	ctx := context.Background()
+	req, err := f.Open(ctx, dbName, dbVersion, upgrade)
 	if err != nil {
-		return nil, err
+		return nil, unavailable(err)
 	}
-	s := &IndexedDB{db: req.Get("result"), onClose: onClose}
-	var closeFn js.Func
-	closeFn = js.FuncOf(func(this js.Value, args []js.Value) any {
-		s.db.Call("close")
-		if s.onClose != nil {
-			s.onClose()
+	type opened struct {
+		db  *idb.Database
+		err error
+	}
+	done := make(chan opened, 1)
+	go func() {
+		db, err := req.Await(ctx)
+		done <- opened{db, err}
+	}()
+	var o opened
+	select {
+	case o = <-done:
+	case <-blocked:
+		// The open stays pending until the other tab lets go; when it
+		// does, close the late connection so the next load upgrades.
+		go func() {
+			if late := <-done; late.err == nil {
+				_ = late.db.Close()
+			}
+		}()
+		return nil, ErrBlocked
+	}
+	if o.err != nil {
+		return nil, unavailable(o.err)
+	}
+	if conn, err := req.Request.Result(); err == nil {
+		watchVersionChange(conn, onClose)
+	}
+	return &IndexedDB{db: o.db}, nil
+}
+
+// unavailable says why the browser refused its storage, in the words of
+// [ErrUnavailable] followed by the browser's own reason.
+func unavailable(err error) error {
+	return fmt.Errorf("%w (%v)", ErrUnavailable, err)
+}
+
+// watchBlocked returns a stand-in for the browser's IndexedDB factory whose
+// open also reports the request's "blocked" event on blocked (go-indexeddb
+// listens for success, error and upgradeneeded only). release frees the
+// handlers once the open has settled.
+func watchBlocked(factory js.Value, blocked chan<- struct{}) (js.Value, func()) {
+	onBlocked := js.FuncOf(func(js.Value, []js.Value) any {
+		select {
+		case blocked <- struct{}{}:
+		default:
 		}
 		return nil
 	})
-	// Lives as long as the connection; the page reloads after it fires.
-	s.db.Set("onversionchange", closeFn)
-	return s, nil
+	var req js.Value
+	open := js.FuncOf(func(this js.Value, args []js.Value) any {
+		a := make([]any, len(args))
+		for i, v := range args {
+			a[i] = v
+		}
+		req = factory.Call("open", a...)
+		req.Call("addEventListener", "blocked", onBlocked)
+		return req
+	})
+	stand := js.Global().Get("Object").New()
+	stand.Set("open", open)
+	return stand, func() {
+		if !req.IsUndefined() {
+			req.Call("removeEventListener", "blocked", onBlocked)
+		}
+		open.Release()
+		onBlocked.Release()
+	}
+}
+
+// watchVersionChange calls onClose when another tab asks to upgrade the
+// database. go-indexeddb closes the connection itself on that event; this
+// tells the page. The handler lives as long as the connection.
+func watchVersionChange(conn js.Value, onClose func()) {
+	if onClose == nil {
+		return
+	}
+	conn.Call("addEventListener", "versionchange", js.FuncOf(func(js.Value, []js.Value) any {
+		onClose()
+		return nil
+	}))
 }
 
 // upgrade creates the object stores a database of an older layout lacks.
-func upgrade(req js.Value) {
-	db := req.Get("result")
-	names := db.Get("objectStoreNames")
+// It runs inside the browser's upgradeneeded event and waits for nothing.
+func upgrade(db *idb.Database, oldVersion, newVersion uint) error {
+	names, err := db.ObjectStoreNames()
+	if err != nil {
+		return err
+	}
 	for _, b := range []string{SessionBucket, DatasetBucket} {
-		if !names.Call("contains", b).Bool() {
-			db.Call("createObjectStore", b)
+		if !slices.Contains(names, b) {
+			if _, err := db.CreateObjectStore(b, idb.ObjectStoreOptions{}); err != nil {
+				return err
+			}
 		}
 	}
+	return nil
 }
 
 // Kind returns "IndexedDB".
 func (s *IndexedDB) Kind() string { return "IndexedDB" }
-
-// Get implements [Backend].
-func (s *IndexedDB) Get(bucket, key string) ([]byte, bool, error) {
-	var v js.Value
-	err := s.txn([]string{bucket}, "readonly", func(tx js.Value, fail func(error)) error {
-		return s.request(tx.Call("objectStore", bucket), "get", []any{key}, func(r js.Value) { v = r }, fail)
-	})
-	if err != nil {
-		return nil, false, err
-	}
-	if v.Type() != js.TypeString {
-		return nil, false, nil
-	}
-	return []byte(v.String()), true, nil
-}
-
-// Put implements [Backend].
-func (s *IndexedDB) Put(bucket, key string, value []byte) error {
-	return s.txn([]string{bucket}, "readwrite", func(tx js.Value, fail func(error)) error {
-		_, err := call(tx.Call("objectStore", bucket), "put", string(value), key)
-		return err
-	})
-}
-
-// Swap implements [Backend]: the read, the check and the write happen in
-// one readwrite transaction, which no other tab can interleave with.
-func (s *IndexedDB) Swap(bucket, key string, value []byte, check func([]byte, bool) error) error {
-	return s.txn([]string{bucket}, "readwrite", func(tx js.Value, fail func(error)) error {
-		store := tx.Call("objectStore", bucket)
-		return s.request(store, "get", []any{key}, func(r js.Value) {
-			var old []byte
-			found := r.Type() == js.TypeString
-			if found {
-				old = []byte(r.String())
-			}
-			if err := check(old, found); err != nil {
-				fail(err)
-				return
-			}
-			if _, err := call(store, "put", string(value), key); err != nil {
-				fail(err)
-			}
-		}, fail)
-	})
-}
-
-// Delete implements [Backend].
-func (s *IndexedDB) Delete(bucket, key string) error {
-	return s.txn([]string{bucket}, "readwrite", func(tx js.Value, fail func(error)) error {
-		_, err := call(tx.Call("objectStore", bucket), "delete", key)
-		return err
-	})
-}
-
-// All implements [Backend].
-func (s *IndexedDB) All(bucket string) (map[string][]byte, error) {
-	var keys, values js.Value
-	err := s.txn([]string{bucket}, "readonly", func(tx js.Value, fail func(error)) error {
-		store := tx.Call("objectStore", bucket)
-		if err := s.request(store, "getAllKeys", nil, func(r js.Value) { keys = r }, fail); err != nil {
-			return err
-		}
-		return s.request(store, "getAll", nil, func(r js.Value) { values = r }, fail)
-	})
-	if err != nil {
-		return nil, err
-	}
-	out := map[string][]byte{}
-	for i := 0; i < keys.Length() && i < values.Length(); i++ {
-		if k, v := keys.Index(i), values.Index(i); k.Type() == js.TypeString && v.Type() == js.TypeString {
-			out[k.String()] = []byte(v.String())
-		}
-	}
-	return out, nil
-}
-
-// Clear implements [Backend].
-func (s *IndexedDB) Clear() error {
-	buckets := []string{SessionBucket, DatasetBucket}
-	return s.txn(buckets, "readwrite", func(tx js.Value, fail func(error)) error {
-		for _, b := range buckets {
-			if _, err := call(tx.Call("objectStore", b), "clear"); err != nil {
-				return err
-			}
-		}
-		return nil
-	})
-}

@@ -11,8 +11,6 @@
 // another tab ([ErrConflict]), so nothing is overwritten silently.
 package store
 
-import "errors"
-
 // The two buckets of the store.
 const (
 	SessionBucket = "sessions"
@@ -40,9 +38,3 @@ type Backend interface {
 	// Kind names the backend for the page ("IndexedDB" or "memory").
 	Kind() string
 }
-
-// ErrConflict means another tab saved a newer version of the session.
-var ErrConflict = errors.New("another tab saved this session after it was opened here")
-
-// ErrNotFound means no session or dataset has the given id or name.
-var ErrNotFound = errors.New("not found")
