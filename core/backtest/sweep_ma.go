@@ -77,10 +77,7 @@ func SweepMovingAverage(y []float64, trainEnd int, widths Range) (*WidthSweep, e
 	if widths.To >= trainEnd {
 		return nil, fmt.Errorf("a width of %d needs at least %d training periods to score even one forecast, but training has %d; sweep widths up to %d", widths.To, widths.To+1, trainEnd, trainEnd-1)
 	}
-	out := &WidthSweep{Rows: make([]WidthRow, 0, widths.To-widths.From+1)}
-	for w := widths.From; w <= widths.To; w++ {
-		out.Rows = append(out.Rows, widthRow(y, trainEnd, w, widths.To))
-	}
+	out := &WidthSweep{Rows: widthRows(y, trainEnd, widths)}
 	out.Best = bestWidth(out.Rows, func(r WidthRow) Errors { return r.Common })
 	out.BestOwn = bestWidth(out.Rows, func(r WidthRow) Errors { return r.Own })
 	if trainEnd < len(y) {
@@ -91,7 +88,8 @@ func SweepMovingAverage(y []float64, trainEnd int, widths Range) (*WidthSweep, e
 }
 
 // widthRow scores one width in one pass over the training data with a
-// running sum of the last w values. Periods before common count only on
+// running sum of the last w values; [widthBlock] does the same for four
+// widths at once. Periods before common count only on
 // the width's own window; from common on they count on both, so the own
 // window is the early part plus the common part.
 func widthRow(y []float64, trainEnd, w, common int) WidthRow {
@@ -115,6 +113,12 @@ func widthRow(y []float64, trainEnd, w, common int) WidthRow {
 		sum += y[t] - y[t-w]
 	}
 	early.n, com.n = split-w, trainEnd-split
+	return finishRow(y, trainEnd, w, early, com)
+}
+
+// finishRow joins the early and common scores of width w into its own
+// window and scores the holdout forecast made at the end of training.
+func finishRow(y []float64, trainEnd, w int, early, com accumulator) WidthRow {
 	own := accumulator{n: early.n + com.n, sq: early.sq + com.sq, abs: early.abs + com.abs}
 	// Recompute the final window exactly so that the holdout forecast does
 	// not carry the rounding of a long running sum.
