@@ -96,6 +96,7 @@ fuzz:
 ## core/cmd/benchtable; the table is also written to build/bench/table.md)
 bench: dist bundle bench-deps
 	$(WASM_ENV) $(GO) build -tags bench $(WASM_OPTS) -o $(BUILD)/bench/quillcast-bench.wasm ./wasm
+	$(WASM_ENV) $(GO) build -trimpath -o $(BUILD)/bench/quillcast-names.wasm ./wasm
 	$(GO) run ./core/cmd/benchtable -prepare -out $(BUILD)/bench
 	QUILLCAST_BENCH=1 QUILLCAST_BENCH_DIR=$(CURDIR)/$(BUILD)/bench $(GO) test -count=1 -timeout 30m -run '^TestBenchPage$$' ./site/browsertest
 	$(GO) run ./core/cmd/benchtable -out $(BUILD)/bench
