@@ -7,7 +7,9 @@ import (
 
 // Exhibit is a numbered table or chart of the memo.
 type Exhibit struct {
-	// Number counts tables and charts together from 1 in reading order.
+	// Number is the exhibit's number: the Number its [Table] or [Chart]
+	// carries, or, when that is 0, the next number after the highest one
+	// given, counted in reading order.
 	Number  int
 	Caption string
 	// Section and Block locate the exhibit: m.Sections[Section].Blocks[Block].
@@ -17,21 +19,53 @@ type Exhibit struct {
 	File string
 }
 
-// Exhibits returns the memo's tables and charts numbered in reading order.
+// Exhibits returns the memo's tables and charts in reading order with their
+// numbers. Exhibits that carry a Number keep it, so a memo written from a
+// session uses the numbers shown under the steps (and may skip those it
+// leaves out); the others are numbered after the highest number given, in
+// reading order. With no numbers given, exhibits count from 1.
 func (m Memo) Exhibits() []Exhibit {
+	next := 1
+	for _, s := range m.Sections {
+		for _, b := range s.Blocks {
+			if n := givenNumber(b); n >= next {
+				next = n + 1
+			}
+		}
+	}
 	var out []Exhibit
 	for si, s := range m.Sections {
 		for bi, b := range s.Blocks {
+			n := givenNumber(b)
+			number := func() int {
+				if n > 0 {
+					return n
+				}
+				next++
+				return next - 1
+			}
 			switch b := b.(type) {
 			case Table:
-				out = append(out, Exhibit{Number: len(out) + 1, Caption: b.Caption, Section: si, Block: bi})
+				out = append(out, Exhibit{Number: number(), Caption: b.Caption, Section: si, Block: bi})
 			case Chart:
-				n := len(out) + 1
+				n = number()
 				out = append(out, Exhibit{Number: n, Caption: b.Caption, Section: si, Block: bi, File: chartFile(n, b.Stem)})
 			}
 		}
 	}
 	return out
+}
+
+// givenNumber returns the number a table or chart carries; 0 for any other
+// block and for exhibits to be numbered in reading order.
+func givenNumber(b Block) int {
+	switch b := b.(type) {
+	case Table:
+		return b.Number
+	case Chart:
+		return b.Number
+	}
+	return 0
 }
 
 // ExhibitTitle returns "Exhibit n — caption", or "Exhibit n" when the

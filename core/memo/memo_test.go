@@ -219,3 +219,33 @@ func TestHTMLPage(t *testing.T) {
 		}
 	}
 }
+
+// TestExhibitNumbersGiven checks that exhibits keep the numbers they carry
+// (the numbers shown under the steps) and that unnumbered ones come after
+// the highest, in reading order.
+func TestExhibitNumbersGiven(t *testing.T) {
+	tests := []struct {
+		name   string
+		blocks []Block
+		want   []string
+	}{
+		{"none given", []Block{Table{Caption: "a"}, Paragraph{Text: "x"}, Chart{Caption: "b", Stem: "b"}},
+			[]string{"1 a ", "2 b charts/02-b.svg"}},
+		{"all given with gaps", []Block{Table{Number: 3, Caption: "a"}, Chart{Number: 9, Caption: "b", Stem: "b"}},
+			[]string{"3 a ", "9 b charts/09-b.svg"}},
+		{"mixed", []Block{Table{Caption: "new"}, Table{Number: 4, Caption: "a"}, Chart{Caption: "c", Stem: "c"}, Chart{Number: 2, Caption: "b", Stem: "b"}},
+			[]string{"5 new ", "4 a ", "6 c charts/06-c.svg", "2 b charts/02-b.svg"}},
+	}
+	for _, tc := range tests {
+		t.Run(tc.name, func(t *testing.T) {
+			m := Memo{Sections: []Section{{Kind: Summary, Blocks: tc.blocks}}}
+			var got []string
+			for _, ex := range m.Exhibits() {
+				got = append(got, fmt.Sprintf("%d %s %s", ex.Number, ex.Caption, ex.File))
+			}
+			if strings.Join(got, "|") != strings.Join(tc.want, "|") {
+				t.Errorf("exhibits of %v:\n got %q\nwant %q", tc.blocks, got, tc.want)
+			}
+		})
+	}
+}

@@ -110,6 +110,10 @@ type List struct {
 
 // Table is an exhibit of already formatted cells, shown as plain text.
 type Table struct {
+	// Number is the exhibit number to show, such as the number the table
+	// has on screen under its step; 0 numbers it in reading order after the
+	// highest number given (see [Memo.Exhibits]).
+	Number int
 	// Caption follows "Exhibit N — " in the exhibit's title.
 	Caption string
 	Columns []Column
@@ -132,6 +136,8 @@ type Column struct {
 // quillcast/core/chart. HTML inlines the SVG; Markdown links to the file
 // charts/NN-stem.svg, NN being the exhibit number.
 type Chart struct {
+	// Number is the exhibit number to show, as for [Table.Number].
+	Number  int
 	Caption string
 	SVG     string
 	// Stem names the chart's file, for example "actual-vs-forecast";

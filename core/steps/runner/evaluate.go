@@ -196,6 +196,21 @@ func comparisonTable(rows []scored, by accuracy.Measure) *Table {
 	return t
 }
 
+// validCell formats v, a validation-period figure of measure by, exactly as
+// the comparison table's column shows it, so prose that quotes a figure
+// repeats the cell character for character.
+func validCell(rows []scored, by string, v float64) string {
+	vals := make([]float64, len(rows))
+	for i, r := range rows {
+		x, ok := r.valid[by]
+		if !ok {
+			x = math.NaN()
+		}
+		vals[i] = x
+	}
+	return numIn(v, format.ColumnDecimals(vals))
+}
+
 func evalNote(x *exec, rows []scored, by accuracy.Measure, best string) string {
 	if best == "" {
 		return fmt.Sprintf("No forecast has a defined %s on the validation period.", measureHeader(by))
@@ -208,11 +223,11 @@ func evalNote(x *exec, rows []scored, by accuracy.Measure, best string) string {
 		}
 		if r.benchmark || r.method == "naive" || r.method == "seasonal-naive" {
 			if v, ok := r.valid[by.String()]; ok {
-				bench = append(bench, fmt.Sprintf("%s %s", r.method, num(v)))
+				bench = append(bench, fmt.Sprintf("%s %s", r.method, validCell(rows, by.String(), v)))
 			}
 		}
 	}
-	note := fmt.Sprintf("Best on the validation period by %s: %s (%s).", measureHeader(by), best, num(bestV))
+	note := fmt.Sprintf("Best on the validation period by %s: %s (%s).", measureHeader(by), best, validCell(rows, by.String(), bestV))
 	if len(bench) > 0 {
 		note += " Naive benchmarks: " + joinWords(bench) + "."
 	}

@@ -139,7 +139,7 @@ func (res *Result) holdoutSentence(rec *fcast) string {
 		}
 		if r.method == "naive" || r.method == "seasonal-naive" {
 			if v, ok := r.valid[by]; ok && r.label != rec.label {
-				bench = append(bench, fmt.Sprintf("%s for the %s benchmark", num(v), strings.ReplaceAll(r.method, "-", " ")))
+				bench = append(bench, fmt.Sprintf("%s for the %s benchmark", validCell(st.eval.rows, by, v), strings.ReplaceAll(r.method, "-", " ")))
 			}
 		}
 	}
@@ -152,7 +152,7 @@ func (res *Result) holdoutSentence(rec *fcast) string {
 	}
 	d := st.data
 	out := fmt.Sprintf("**Holdout accuracy:** %s %s on the validation period %s to %s (%s not used for fitting)",
-		strings.ToUpper(by), num(v), d.periods[st.split.trainEnd], d.periods[len(d.y)-1], count(len(d.y)-st.split.trainEnd, "period", "periods"))
+		strings.ToUpper(by), validCell(st.eval.rows, by, v), d.periods[st.split.trainEnd], d.periods[len(d.y)-1], count(len(d.y)-st.split.trainEnd, "period", "periods"))
 	if len(bench) > 0 {
 		out += ", against " + joinWords(bench)
 	}

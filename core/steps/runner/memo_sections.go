@@ -28,7 +28,7 @@ func (res *Result) lastBlocks(verb, kind string) []Block {
 }
 
 func toTable(b Block) memo.Table {
-	t := memo.Table{Caption: b.Title, Rows: b.Table.Rows, Note: b.Text}
+	t := memo.Table{Number: b.Exhibit, Caption: b.Title, Rows: b.Table.Rows, Note: b.Text}
 	for i, h := range b.Table.Headers {
 		t.Columns = append(t.Columns, memo.Column{Header: h, Numeric: i < len(b.Table.Right) && b.Table.Right[i]})
 	}
@@ -42,7 +42,7 @@ func toChart(b Block) memo.Chart {
 			stem = stem[i+j+2:] // drop "exhibit-NN-"
 		}
 	}
-	return memo.Chart{Caption: b.Title, SVG: b.SVG, Stem: stem}
+	return memo.Chart{Number: b.Exhibit, Caption: b.Title, SVG: b.SVG, Stem: stem}
 }
 
 func (res *Result) dataSection() memo.Section {
@@ -89,12 +89,17 @@ func (res *Result) partitionSection() memo.Section {
 	return s
 }
 
+// numbersNote tells the reader why exhibit numbers skip and do not always
+// rise: they are the numbers shown under the steps.
+const numbersNote = "Exhibits keep the numbers they have under the steps of the session, so each can be found where it was made; the memo shows the ones a reader needs, so some numbers are skipped."
+
 func (res *Result) comparisonSection() memo.Section {
 	s := memo.Section{Kind: memo.Comparison}
 	tables := res.lastBlocks("evaluate", TableBlock)
 	if len(tables) == 0 {
 		s.Blocks = append(s.Blocks, para("No comparison was made: the session has no successful `evaluate` step."))
 	}
+	s.Blocks = append(s.Blocks, para("%s", numbersNote))
 	for _, b := range tables {
 		s.Blocks = append(s.Blocks, toTable(b))
 	}
@@ -143,10 +148,21 @@ func (res *Result) chartsSection(rec *fcast) memo.Section {
 	return s
 }
 
+// forecastSection shows the recommended forecast's table as it appears under
+// its step (or under the backtest that gave it empirical intervals), with
+// the same exhibit number; only a forecast whose table was never shown gets
+// a table of its own.
 func (res *Result) forecastSection(rec *fcast) memo.Section {
 	s := memo.Section{Kind: memo.Forecasts}
 	if rec == nil {
 		s.Blocks = append(s.Blocks, para("No forecast is recommended, so no forecast table is given."))
+		return s
+	}
+	if b, ok := res.forecastBlock(rec); ok {
+		s.Blocks = append(s.Blocks, toTable(b))
+		if len(rec.bands) == 0 {
+			s.Blocks = append(s.Blocks, para("%s", intervalSource(rec)))
+		}
 		return s
 	}
 	st := res.final
@@ -172,6 +188,28 @@ func (res *Result) forecastSection(rec *fcast) memo.Section {
 	t.Note = intervalSource(rec)
 	s.Blocks = append(s.Blocks, t)
 	return s
+}
+
+// forecastBlock finds the table that shows f's forecast past the end of the
+// data with the intervals f now carries: the backtest's table when the
+// intervals are empirical, else the table under the step that made f.
+func (res *Result) forecastBlock(f *fcast) (Block, bool) {
+	prefix := "Forecast " + f.label + ", "
+	if len(f.bands) > 0 && f.bands[0].empirical {
+		prefix = "Forecast " + f.label + " with empirical intervals, "
+	}
+	for i := len(res.Outputs) - 1; i >= 0; i-- {
+		o := res.Outputs[i]
+		if o.Status != Done {
+			continue
+		}
+		for _, b := range o.Blocks {
+			if b.Kind == TableBlock && strings.HasPrefix(b.Title, prefix) {
+				return b, true
+			}
+		}
+	}
+	return Block{}, false
 }
 
 func intervalSource(f *fcast) string {

@@ -31,15 +31,20 @@ func (x *exec) pick() error {
 			bv = r.valid[by.String()]
 		}
 	}
-	why := fmt.Sprintf("%s has the best %s on the validation period (%s) among %s.", best, measureHeader(by), num(bv), count(len(rows), "forecast", "forecasts"))
 	bench := x.benchmarks()
+	all := rows
 	for _, b := range bench {
-		r := x.score(b, true)
+		all = append(all, x.score(b, true))
+	}
+	// Figures are written as a comparison table of these rows shows them.
+	cell := func(v float64) string { return validCell(all, by.String(), v) }
+	why := fmt.Sprintf("%s has the best %s on the validation period (%s) among %s.", best, measureHeader(by), cell(bv), count(len(rows), "forecast", "forecasts"))
+	for _, r := range all[len(rows):] {
 		if v, ok := r.valid[by.String()]; ok {
 			if by.Better(v, bv) {
-				why += fmt.Sprintf(" The %s benchmark did better (%s): the chosen method does not beat it.", b.method, num(v))
+				why += fmt.Sprintf(" The %s benchmark did better (%s): the chosen method does not beat it.", r.method, cell(v))
 			} else {
-				why += fmt.Sprintf(" The %s benchmark scored %s.", b.method, num(v))
+				why += fmt.Sprintf(" The %s benchmark scored %s.", r.method, cell(v))
 			}
 		}
 	}
