@@ -70,6 +70,13 @@ func (a *app) attach(args []js.Value) (any, error) {
 	if err != nil {
 		return nil, err
 	}
+	// A file over the reader's limit is refused before it is kept: no
+	// step can read it, and storing it would only fill the browser's
+	// storage.
+	if len(data) > series.DefaultMaxBytes {
+		_, err := series.Read(data, name, series.ReadOptions{})
+		return nil, err
+	}
 	// Keep the bytes even when the default reading fails: a load step with
 	// the right options (date order, decimal mark) may still read them.
 	a.openStore()
