@@ -7,6 +7,7 @@ import (
 	"fmt"
 	"strings"
 
+	"quillcast/core/memo"
 	"quillcast/core/session"
 )
 
@@ -28,10 +29,9 @@ type pageLine struct {
 }
 
 // partsOf splits a session document into the parts the page shows,
-// prose rendered for reading.
+// prose rendered for reading as the memo renders it ([memo.Note]).
 func partsOf(doc *session.Document) []pagePart {
 	out := []pagePart{}
-	md := newProse()
 	lines := doc.StepLines()
 	for i, p := range doc.Parts {
 		switch p.Kind {
@@ -46,7 +46,7 @@ func partsOf(doc *session.Document) []pagePart {
 		case session.Data:
 			out = append(out, pagePart{Kind: "data", Name: p.Name, Text: p.Body})
 		default:
-			out = append(out, pagePart{Kind: "prose", Text: p.Raw, HTML: proseHTML(md, p.Raw)})
+			out = append(out, pagePart{Kind: "prose", Text: p.Raw, HTML: memo.Note(p.Raw)})
 		}
 	}
 	return out

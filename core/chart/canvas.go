@@ -59,7 +59,7 @@ func newCanvas(f Frame, w, h int, desc string, sizeHint int) *canvas {
 	}
 	c.esc(desc)
 	c.s("</desc>\n<style>")
-	c.s(styleSheet)
+	c.s(StyleSheet)
 	c.s("</style>\n")
 	c.s(`<rect class="qc-bg" x="0" y="0" width="`)
 	c.int(w)

@@ -243,3 +243,19 @@ func TestSweepBest(t *testing.T) {
 		})
 	}
 }
+
+// TestStyleSheetIsEmbedded checks that every chart embeds exactly
+// [StyleSheet] as its one <style> element, so a hash of the constant
+// allows every chart under a Content-Security-Policy.
+func TestStyleSheetIsEmbedded(t *testing.T) {
+	t.Parallel()
+	want := "<style>" + StyleSheet + "</style>"
+	for _, c := range goldenCases() {
+		t.Run(c.name, func(t *testing.T) {
+			svg := c.chart.SVG()
+			if strings.Count(svg, "<style>") != 1 || !strings.Contains(svg, want) {
+				t.Errorf("the chart does not embed StyleSheet as its one style element")
+			}
+		})
+	}
+}

@@ -31,10 +31,12 @@ const (
 // holdoutSlot is the palette colour whose light tint marks the holdout.
 const holdoutSlot = 3
 
-// styleSheet is embedded in every chart. Class names start with "qc-" so
-// that several inline charts and the host page do not clash; the rules are
-// the same in every chart, so repeating them inline is harmless.
-const styleSheet = `.qc{font-family:system-ui,-apple-system,"Segoe UI",sans-serif;font-size:12px}` +
+// StyleSheet is the text of the <style> element embedded in every chart,
+// byte for byte, so a host page can allow it by hash in its
+// Content-Security-Policy without drawing a chart. Class names start with
+// "qc-" so that several inline charts and the host page do not clash; the
+// rules are the same in every chart, so repeating them inline is harmless.
+const StyleSheet = `.qc{font-family:system-ui,-apple-system,"Segoe UI",sans-serif;font-size:12px}` +
 	`.qc-bg{fill:#fcfbf7}` +
 	`.qc-ink{stroke:#22262e;fill:none}.qc-inkf{fill:#22262e}` +
 	`.qc-text{fill:#22262e}.qc-muted{fill:#5d6470}.qc-title{fill:#22262e;font-size:15px;font-weight:600}` +

@@ -1,6 +1,12 @@
 package static
 
 import (
+	"crypto/sha256"
+	"encoding/base64"
+	"regexp"
+
+	"quillcast/core/chart"
+
 	"net/http"
 	"net/http/httptest"
 	"os"
@@ -129,5 +135,27 @@ func TestContentTypeUnknown(t *testing.T) {
 	}
 	if got := ContentType("DATA.CSV"); got != "text/csv; charset=utf-8" {
 		t.Errorf("ContentType(DATA.CSV) = %q, want text/csv", got)
+	}
+}
+
+// TestPolicyAllowsChartStyles draws charts of two kinds and checks that the
+// hash of each one's <style> text is among the policy's style sources.
+func TestPolicyAllowsChartStyles(t *testing.T) {
+	t.Parallel()
+	charts := map[string]string{
+		"line": chart.Line{Periods: []string{"2024-01", "2024-02"}, Series: []chart.Series{{Name: "units", Values: []float64{1, 2}}}}.SVG(),
+		"bars": chart.Bars{Labels: []string{"1", "2"}, Series: []chart.Series{{Name: "MASE", Values: []float64{0.5, 0.7}}}}.SVG(),
+	}
+	policy := Policy()
+	for name, svg := range charts {
+		m := regexp.MustCompile(`(?s)<style>(.*?)</style>`).FindStringSubmatch(svg)
+		if m == nil {
+			t.Errorf("%s chart: no style element", name)
+			continue
+		}
+		sum := sha256.Sum256([]byte(m[1]))
+		if h := "'sha256-" + base64.StdEncoding.EncodeToString(sum[:]) + "'"; !strings.Contains(policy, h) {
+			t.Errorf("%s chart: the policy lacks its style hash %s", name, h)
+		}
 	}
 }
