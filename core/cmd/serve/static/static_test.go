@@ -3,16 +3,15 @@ package static
 import (
 	"crypto/sha256"
 	"encoding/base64"
-	"regexp"
-
-	"quillcast/core/chart"
-
 	"net/http"
 	"net/http/httptest"
 	"os"
 	"path/filepath"
+	"regexp"
 	"strings"
 	"testing"
+
+	"quillcast/core/chart"
 )
 
 func writeSite(t *testing.T) string {
