@@ -165,10 +165,10 @@ func classify(info string) (Kind, string) {
 	case StepsInfo:
 		return Steps, ""
 	case DataInfo:
-		if len(fields) > 1 {
-			return Data, fields[1]
-		}
-		return Data, ""
+		// The name is the rest of the line: file names often hold
+		// spaces ("Orders 2024.csv").
+		_, name, _ := strings.Cut(strings.TrimSpace(info), DataInfo)
+		return Data, strings.TrimSpace(name)
 	}
 	return Prose, ""
 }
