@@ -51,6 +51,7 @@ const notebook = new Notebook($("parts"), {
 async function run(parts) {
   const seq = ++runSeq;
   setStatus("Running the steps…");
+  showProgress(null);
   const res = await call("run", JSON.stringify(parts));
   if (seq !== runSeq) return null; // a newer edit is on its way
   session.text = res.text;
@@ -59,6 +60,21 @@ async function run(parts) {
   const n = res.result.errors ? res.result.errors.length : 0;
   setStatus(n === 0 ? "All steps ran. Everything stays on this computer." : `${n} step${n === 1 ? " has a problem" : "s have problems"}; see the marked lines.`, n > 0);
   return res;
+}
+
+/**
+ * showProgress sets the progress bar from the engine's report {fraction,
+ * text}; null makes it indeterminate until the first report of a run.
+ */
+function showProgress(detail) {
+  const bar = $("progress");
+  if (!detail) {
+    bar.removeAttribute("value");
+    $("progress-text").textContent = "";
+    return;
+  }
+  bar.value = detail.fraction;
+  $("progress-text").textContent = detail.text;
 }
 
 async function runAndSave(parts) {
@@ -271,6 +287,7 @@ function wire() {
     history.replaceState(null, "", location.pathname);
     openShared(shared).catch((e) => setStatus(explain(e), true));
   });
+  globalThis.addEventListener("quillcast-progress", (e) => showProgress(e.detail));
   window.addEventListener("quillcast-storage-closed", () => banner("Quillcast was updated in another tab. Reload this page to keep saving."));
 }
 

@@ -116,6 +116,8 @@ function received(m) {
     engine.pending.delete(m.id);
     p.resolve(m.text);
     busyCheck();
+  } else if (m.type === "progress") {
+    globalThis.dispatchEvent(new CustomEvent("quillcast-progress", { detail: m.detail }));
   } else if (m.type === "storage-closed") {
     globalThis.dispatchEvent(new CustomEvent("quillcast-storage-closed"));
   } else if (m.type === "stopped") {

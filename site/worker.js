@@ -6,7 +6,7 @@
 //               {type: "call", id, name, args}
 // Messages out: {type: "ready", version, names}, {type: "reply", id, text},
 //               {type: "failed", message}, {type: "stopped"},
-//               {type: "storage-closed"}
+//               {type: "storage-closed"}, {type: "progress", detail}
 //
 // The page starts it from a Blob holding wasm_exec.js followed by this
 // text, so Go is already defined and no file is fetched; loaded on its own,
@@ -39,6 +39,8 @@ async function answer(m) {
 }
 
 self.addEventListener("quillcast-storage-closed", () => self.postMessage({ type: "storage-closed" }));
+// A run's progress, {fraction, text}, as the engine reports it.
+self.addEventListener("quillcast-progress", (e) => self.postMessage({ type: "progress", detail: e.detail }));
 
 self.onmessage = (e) => {
   const m = e.data;

@@ -21,7 +21,7 @@ type ran struct {
 // runSession(parts string) runs the session whose parts the page sends as
 // JSON text (see [pagePart]) on the attached files. Steps unchanged since
 // the last run reuse their results, so an edit re-runs only from the edited
-// step on.
+// step on. Progress is dispatched as it goes (see [reportProgress]).
 func (a *app) runSession(args []js.Value) (any, error) {
 	partsJSON, err := stringArg(args, 0, "the session")
 	if err != nil {
@@ -35,7 +35,7 @@ func (a *app) runSession(args []js.Value) (any, error) {
 	files := maps.Clone(a.files)
 	r := a.run
 	a.mu.Unlock()
-	res := r.Run(context.Background(), doc, runner.Data{Files: files})
+	res := r.RunWith(context.Background(), doc, runner.Data{Files: files}, runner.Options{Progress: reportProgress})
 	a.mu.Lock()
 	a.last = res
 	a.mu.Unlock()

@@ -3,6 +3,7 @@ package browsertest
 import (
 	"context"
 	"fmt"
+	"math"
 	"os"
 	"path/filepath"
 	"strings"
@@ -196,6 +197,62 @@ func TestStopRun(t *testing.T) {
 	if n := eval[int](p, `document.querySelectorAll('#parts svg.qc').length`); n == 0 {
 		t.Error("after the restart no chart is drawn")
 	}
+	p.checkClean(ready)
+}
+
+// TestStopKeepsPreviousResults stops a run as soon as it reports progress:
+// the page keeps the previous run's outputs, the stored session is not
+// written, and a reload shows the same session. A run to the end then fills
+// the progress bar step by step, from the engine's own reports.
+func TestStopKeepsPreviousResults(t *testing.T) {
+	p := openSite(t)
+	ready := p.open("")
+	outputs := `[...document.querySelectorAll('#parts .output')].map(n => n.textContent).join('\n')`
+	before := eval[string](p, outputs)
+	saved := eval[string](p, `document.documentElement.dataset.saved`)
+	if before == "" || saved == "" {
+		t.Fatalf("the demo has outputs %q and save state %q before the stop; want both", before[:min(len(before), 40)], saved)
+	}
+	stopped := eval[bool](p, `new Promise((resolve) => {
+		globalThis.addEventListener('quillcast-progress', () => { document.getElementById('stop').click(); resolve(true); }, { once: true });
+		document.getElementById('run-all').click();
+	})`)
+	if !stopped {
+		t.Fatal("the run reported no progress")
+	}
+	waitFor(p, "the stopped message", `document.getElementById('status').textContent.startsWith('Stopped')`)
+	waitFor(p, "the fresh engine", `globalThis.quillcast && globalThis.quillcast.ready === true`)
+	if after := eval[string](p, outputs); after != before {
+		t.Errorf("the outputs changed when the run was stopped")
+	}
+	if got := eval[string](p, `document.documentElement.dataset.saved`); got != saved {
+		t.Errorf("save state %q after the stop, want %q (nothing written)", got, saved)
+	}
+
+	// A whole run on the fresh engine (nothing cached): every report's
+	// fraction lies in [0, 1], never goes back, and the last one is 1.
+	eval[bool](p, `(() => { globalThis.seen = []; globalThis.addEventListener('quillcast-progress', (e) => globalThis.seen.push(e.detail.fraction)); return true; })()`)
+	p.run("running again", 10*time.Second, chromedp.Click(chromedp.CSS("#run-all")))
+	waitFor(p, "the steps to run again", `document.getElementById('status').textContent.startsWith('All steps ran')`)
+	seen := eval[[]float64](p, `globalThis.seen`)
+	if len(seen) < 3 {
+		t.Fatalf("%d progress reports in a whole run; want one per step", len(seen))
+	}
+	for i, f := range seen {
+		if f < 0 || f > 1 || (i > 0 && f < seen[i-1]) {
+			t.Errorf("progress reports %v: report %d is out of order or range", seen, i)
+			break
+		}
+	}
+	if last := seen[len(seen)-1]; math.Abs(last-1) > 1e-9 {
+		t.Errorf("the last progress report is %v, want 1", last)
+	}
+	if got := eval[string](p, outputs); got != before {
+		t.Errorf("the outputs of the run again differ from those before the stop")
+	}
+
+	ready = p.open("")
+	waitFor(p, "the restored outputs", outputs+` === `+fmt.Sprintf("%q", before))
 	p.checkClean(ready)
 }
 

@@ -36,7 +36,8 @@ func (x *exec) backtest() error {
 	var done []*backtest.Backtest
 	var labels []string
 	var later []Block
-	for _, f := range chosen {
+	for i, f := range chosen {
+		x.progress(i, len(chosen))
 		if f.model == nil {
 			x.message(Warning, "%s cannot be backtested: it has no method to refit at each origin.", f.label)
 			continue

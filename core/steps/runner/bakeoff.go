@@ -54,7 +54,7 @@ func (x *exec) bakeoff() error {
 	if len(data) == 0 {
 		return fmt.Errorf("no series of %s can be held out %d periods", d.file, last)
 	}
-	res, err := bakeoff.Run(x.ctx, data, bakeoff.Options{Season: max(d.season, 1), Lag: max(d.season, 1), Methods: methods, Workers: 1})
+	res, err := bakeoff.Run(x.ctx, data, bakeoff.Options{Season: max(d.season, 1), Lag: max(d.season, 1), Methods: methods, Workers: 1, Progress: x.progress})
 	if err != nil {
 		return err
 	}

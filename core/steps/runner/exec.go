@@ -18,6 +18,10 @@ type exec struct {
 	s    *steps.Step
 	data Data
 	out  *Output
+	// rep reports the parts of a long step; index is the step's place
+	// among the session's steps, from 0.
+	rep   reporter
+	index int
 }
 
 // run dispatches on the verb.

@@ -45,13 +45,22 @@ func New() *Runner { return &Runner{cat: steps.DefaultCatalog(), cache: map[stri
 // saying the run was stopped. Data blocks embedded in the document are
 // used for names not attached.
 func (r *Runner) Run(ctx context.Context, doc *session.Document, data Data) *Result {
+	return r.RunWith(ctx, doc, data, Options{})
+}
+
+// RunWith is [Runner.Run] with options: o.Progress hears how far the run
+// has come (see [Options]).
+func (r *Runner) RunWith(ctx context.Context, doc *session.Document, data Data, o Options) *Result {
 	prog := steps.ParseWith(doc, r.cat)
 	data = withEmbedded(data, doc)
 	res := &Result{}
 	st := (&state{}).clone()
 	next := map[string]cached{}
 	key := ""
-	for _, s := range prog.Steps {
+	rep := reporter{send: o.Progress, steps: len(prog.Steps)}
+	defer rep.end()
+	for i, s := range prog.Steps {
+		rep.step(i, s.N, s.Verb)
 		key = stepKey(key, s, data)
 		if c, ok := r.cache[key]; ok {
 			out := relocate(c.out, s)
@@ -61,7 +70,7 @@ func (r *Runner) Run(ctx context.Context, doc *session.Document, data Data) *Res
 			st = c.after
 			continue
 		}
-		after, out := r.runStep(ctx, st, s, data)
+		after, out := r.runStep(ctx, st, s, data, rep, i)
 		res.add(out)
 		res.Computed++
 		if ctx.Err() == nil {
@@ -140,7 +149,9 @@ func relocate(out Output, s *steps.Step) Output {
 }
 
 // runStep runs one step on a clone of st, recovering any fault.
-func (r *Runner) runStep(ctx context.Context, st *state, s *steps.Step, data Data) (after *state, out Output) {
+// rep and index let a long step report its parts (index is the step's
+// place among the steps, from 0).
+func (r *Runner) runStep(ctx context.Context, st *state, s *steps.Step, data Data, rep reporter, index int) (after *state, out Output) {
 	out = Output{Step: s.N, Line: s.Line, Text: s.Text, Verb: s.Verb, Status: Done, Blocks: []Block{}}
 	work := st.clone()
 	if s.Err != nil {
@@ -161,7 +172,7 @@ func (r *Runner) runStep(ctx context.Context, st *state, s *steps.Step, data Dat
 	if r.fault != nil {
 		r.fault(s)
 	}
-	x := &exec{r: r, ctx: ctx, st: work, s: s, data: data, out: &out}
+	x := &exec{r: r, ctx: ctx, st: work, s: s, data: data, out: &out, rep: rep, index: index}
 	if err := x.run(); err != nil {
 		col := s.Column
 		var at *placedError
