@@ -289,3 +289,130 @@ func BenchmarkSeasonalKendall(b *testing.B) {
 		})
 	}
 }
+
+// bruteSen returns the median of the slopes (y_j - y_i)/(j - i) over the
+// pairs i < j of the listed positions with j - i a multiple of step, from
+// the list of every such pair (the definition).
+func bruteSen(y []float64, positions []int, step int) float64 {
+	var slopes []float64
+	for a, i := range positions {
+		for _, j := range positions[a+1:] {
+			if (j-i)%step == 0 {
+				slopes = append(slopes, (y[j]-y[i])/float64(j-i))
+			}
+		}
+	}
+	slices.Sort(slopes)
+	k := len(slopes)
+	if k%2 == 1 {
+		return slopes[k/2]
+	}
+	return (slopes[k/2-1] + slopes[k/2]) / 2
+}
+
+// TestTrendThinnedSlope: above the value limit Sen's slope is taken over
+// every k-th value (every k-th season), with S, VarS, Z and P unchanged.
+// The limit is lowered to reach the thinning on series short enough to
+// check by listing every pair of the kept positions (the definition).
+func TestTrendThinnedSlope(t *testing.T) {
+	t.Parallel()
+	rng := rand.New(rand.NewPCG(11, 12))
+	tests := []struct {
+		name      string
+		n, step   int
+		limit     int
+		wantEvery int // hand calculation below
+	}{
+		// 300 values, at most 50: k = ceil(300/50) = 6, 50 values kept.
+		{"plain", 300, 1, 50, 6},
+		// 301 values, at most 50: k = 7, positions 0, 7, ..., 294 (43 values).
+		{"plain uneven", 301, 1, 50, 7},
+		// 26 seasons of 12 (312 values), at most 60 values = 5 seasons:
+		// k = ceil(26/5) = 6, seasons 0, 6, 12, 18, 24 kept.
+		{"seasonal", 312, 12, 60, 6},
+		// 317 values = 26 seasons and a part: 27 started seasons, k = 6,
+		// seasons 0, 6, ..., 24 kept.
+		{"seasonal uneven", 317, 12, 60, 6},
+		// At or under the limit nothing is thinned.
+		{"under the limit", 60, 4, 60, 1},
+	}
+	for _, tc := range tests {
+		y := make([]float64, tc.n)
+		for i := range y {
+			y[i] = 0.2*float64(i) + 10*math.Sin(float64(i%12)) + 6*rng.NormFloat64()
+		}
+		t.Run(tc.name, func(t *testing.T) {
+			got, err := kendallLimit(y, tc.step, tc.limit)
+			if err != nil {
+				t.Fatal(err)
+			}
+			full, err := kendallLimit(y, tc.step, tc.n)
+			if err != nil {
+				t.Fatal(err)
+			}
+			if got.SlopeEvery != tc.wantEvery {
+				t.Errorf("SlopeEvery %d, want %d", got.SlopeEvery, tc.wantEvery)
+			}
+			if got.S != full.S || got.VarS != full.VarS || got.Z != full.Z || got.P != full.P {
+				t.Errorf("thinning changed the test: %+v, every value gives %+v", got, full)
+			}
+			var kept []int
+			for i := range y {
+				if (i/tc.step)%tc.wantEvery == 0 {
+					kept = append(kept, i)
+				}
+			}
+			if len(kept) > tc.limit {
+				t.Errorf("%d values kept, limit %d", len(kept), tc.limit)
+			}
+			want := bruteSen(y, kept, tc.step)
+			spread := slices.Max(y) - slices.Min(y)
+			if math.Abs(got.Slope-want) > 1e-9*spread {
+				t.Errorf("slope %.12g, the kept pairs give %.12g", got.Slope, want)
+			}
+		})
+	}
+}
+
+// trendBenchSizes are the series lengths of the long-series benchmarks of
+// the trend test, up to the longest series the page accepts.
+var trendBenchSizes = []struct {
+	name string
+	n    int
+}{{"n=20000", 20000}, {"n=100000", 100000}, {"n=1000000", 1000000}}
+
+// BenchmarkTrendLong measures the plain and seasonal trend tests on long
+// series, where Sen's slope is taken over at most SlopeValues values, and
+// the exact slope over every pair for comparison.
+func BenchmarkTrendLong(b *testing.B) {
+	for _, size := range trendBenchSizes {
+		y := seasonalSeries(size.n, 12, 1)
+		b.Run("MannKendall/"+size.name, func(b *testing.B) {
+			b.ReportAllocs()
+			for b.Loop() {
+				if _, err := MannKendall(y); err != nil {
+					b.Fatal(err)
+				}
+			}
+		})
+		b.Run("SeasonalKendall/"+size.name, func(b *testing.B) {
+			b.ReportAllocs()
+			for b.Loop() {
+				if _, err := SeasonalKendall(y, 12); err != nil {
+					b.Fatal(err)
+				}
+			}
+		})
+		if size.n > 100000 {
+			continue // the exact slope over every pair takes seconds here
+		}
+		b.Run("every-pair/"+size.name, func(b *testing.B) {
+			b.ReportAllocs()
+			for b.Loop() {
+				if _, err := kendallLimit(y, 1, size.n); err != nil {
+					b.Fatal(err)
+				}
+			}
+		})
+	}
+}
