@@ -78,6 +78,22 @@ async function benchSweep(n, reps, inp, fn) {
   ws.forEach((w) => w.terminate());
   return JSON.stringify(out);
 }
+async function benchSweeps(n, reps, inp) {
+  const walk = await bytes('/walk.f64');
+  const pools = { one: await workers(1), many: await workers(n) };
+  const out = { one: { cold: 0, warm: [] }, many: { cold: 0, warm: [] } };
+  for (const ws of Object.values(pools)) await Promise.all(ws.map((w) => call(w, 'quillcastBench', 'load', walk)));
+  for (let r = 0; r <= reps; r++) {
+    for (const [key, ws] of Object.entries(pools)) {
+      const t0 = performance.now();
+      await Promise.all(ws.map((w, i) => call(w, 'quillcastBench', 'sweep', ...chunk(i, ws.length, inp.from, inp.to), inp.train)));
+      const s = (performance.now() - t0) / 1e3;
+      if (r === 0) out[key].cold = s; else out[key].warm.push(s);
+    }
+  }
+  Object.values(pools).flat().forEach((w) => w.terminate());
+  return JSON.stringify(out);
+}
 async function benchHW(reps, batch, season) {
   const y = await bytes('/hw.f64');
   const [w] = await workers(1);
@@ -167,17 +183,17 @@ func computeRows(t *testing.T, dir string, figs *benchFigures) {
 	figs.Workers = n
 	inp := fmt.Sprintf(`{from: %d, to: %d, train: %d}`, in.From, in.To, in.Train)
 
-	var sweep struct {
+	type runs struct {
 		Cold float64   `json:"cold"`
 		Warm []float64 `json:"warm"`
 	}
-	evalLong(p, fmt.Sprintf(`benchSweep(1, 5, %s, 'sweep')`, inp), 5*time.Minute, &sweep)
-	figs.Rows["sweep-1"] = benchSample{Values: sweep.Warm, Unit: "s",
-		Note: fmt.Sprintf("one worker, widths 1..200, wall time seen by the page, after one run that warms up the browser's optimising compiler; that first run in a fresh worker took %.2f s", sweep.Cold)}
-	sweep.Warm = nil
-	evalLong(p, fmt.Sprintf(`benchSweep(%d, 5, %s, 'sweep')`, n, inp), 5*time.Minute, &sweep)
-	figs.Rows["sweep-n"] = benchSample{Values: sweep.Warm, Unit: "s",
-		Note: fmt.Sprintf("widths split evenly across %d workers, after a warm-up run (first run %.2f s)", n, sweep.Cold)}
+	var sweeps struct{ One, Many runs }
+	evalLong(p, fmt.Sprintf(`benchSweeps(%d, 7, %s)`, n, inp), 10*time.Minute, &sweeps)
+	figs.Rows["sweep-1"] = benchSample{Values: sweeps.One.Warm, Unit: "s",
+		Note: fmt.Sprintf("one worker, widths 1..200, wall time seen by the page, runs alternating with the %d-worker ones, after one run that warms up the browser's optimising compiler (that first run took %.2f s)", n, sweeps.One.Cold)}
+	figs.Rows["sweep-n"] = benchSample{Values: sweeps.Many.Warm, Unit: "s",
+		Note: fmt.Sprintf("widths split evenly across %d workers, after a warm-up run (%.2f s)", n, sweeps.Many.Cold)}
+	var sweep runs
 	if os.Getenv("QUILLCAST_BENCH_PLAIN") != "0" {
 		sweep.Warm = nil
 		evalLong(p, fmt.Sprintf(`benchSweep(1, 0, %s, 'plain')`, inp), 10*time.Minute, &sweep)

@@ -39,6 +39,9 @@ func faster(ours, other sample) (string, float64) {
 		return "", 0
 	}
 	r := other.median() / ours.median()
+	if r < 1 {
+		return fmt.Sprintf("%.1f× slower", 1/r), r
+	}
 	return fmt.Sprintf("%.1f× faster", r), r
 }
 
