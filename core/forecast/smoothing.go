@@ -143,18 +143,6 @@ func (s Smoothing) Fit(y []float64, season int) (*Fit, error) {
 	return f, nil
 }
 
-// multSeasonInterval sets the approximate interval of a multiplicative
-// season (smoothing_interval_mult.go) and returns a note on it.
-func multSeasonInterval(f *Fit, form esForm, p [nConst]float64, tr esTrace) string {
-	rel2, ok := relativeSigma2(f.train, tr.fitted)
-	if !ok {
-		return "no analytic prediction interval: a fitted value is zero, so the relative errors cannot be formed; use empirical intervals from a backtest"
-	}
-	f.variance = multSeasonVariance(form, p, tr.last, f.N, rel2)
-	f.Stats = append(f.Stats, Param{Name: "relative-sigma2", Value: rel2, Estimated: true})
-	return fmt.Sprintf("the prediction interval is approximate: it treats each one-step error as a share of the forecast (relative standard error %.1f%%), so it widens with the level and the season", 100*math.Sqrt(rel2))
-}
-
 // openStates lists the initial states not given by hand, as indices of
 // the full variable layout (smoothing_fullgrad.go).
 func (s Smoothing) openStates(form esForm) []int {

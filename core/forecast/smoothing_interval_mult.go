@@ -1,6 +1,9 @@
 package forecast
 
-import "math"
+import (
+	"fmt"
+	"math"
+)
 
 // This file holds the forecast variance of Holt-Winters with a
 // multiplicative season, read as the state-space model with multiplicative
@@ -97,4 +100,16 @@ func relativeSigma2(y, fitted []float64) (float64, bool) {
 	}
 	s /= float64(len(y))
 	return s, !math.IsNaN(s) && !math.IsInf(s, 0)
+}
+
+// multSeasonInterval sets the approximate interval of a multiplicative
+// season (smoothing_interval_mult.go) and returns a note on it.
+func multSeasonInterval(f *Fit, form esForm, p [nConst]float64, tr esTrace) string {
+	rel2, ok := relativeSigma2(f.train, tr.fitted)
+	if !ok {
+		return "no analytic prediction interval: a fitted value is zero, so the relative errors cannot be formed; use empirical intervals from a backtest"
+	}
+	f.variance = multSeasonVariance(form, p, tr.last, f.N, rel2)
+	f.Stats = append(f.Stats, Param{Name: "relative-sigma2", Value: rel2, Estimated: true})
+	return fmt.Sprintf("the prediction interval is approximate: it treats each one-step error as a share of the forecast (relative standard error %.1f%%), so it widens with the level and the season", 100*math.Sqrt(rel2))
 }
