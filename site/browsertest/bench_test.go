@@ -36,6 +36,7 @@ type benchSample struct {
 
 // benchFigures is page.json.
 type benchFigures struct {
+	Load    string                 `json:"load"` // one-minute load average at start and end
 	Workers int                    `json:"workers"`
 	HWSSE   float64                `json:"hwSSE"`
 	Rows    map[string]benchSample `json:"rows"`
@@ -109,6 +110,7 @@ func readyTimes(p *page) (engine, render float64) {
 func TestBenchPage(t *testing.T) {
 	dir := benchDir(t)
 	figs := benchFigures{Rows: map[string]benchSample{}}
+	startLoad := loadAverage()
 	const visits = 5
 
 	// Time to ready: a fresh browser (empty profile) per first visit; the
@@ -138,6 +140,7 @@ func TestBenchPage(t *testing.T) {
 	}
 
 	computeRows(t, dir, &figs)
+	figs.Load = startLoad + " at start, " + loadAverage() + " at end"
 
 	b, err := json.MarshalIndent(figs, "", "  ")
 	if err != nil {
@@ -290,4 +293,13 @@ func benchServer(t *testing.T, dir string, competition string) *url.URL {
 		t.Fatal(err)
 	}
 	return u
+}
+
+// loadAverage returns the machine's one-minute load average, or "?".
+func loadAverage() string {
+	b, err := os.ReadFile("/proc/loadavg")
+	if f := strings.Fields(string(b)); err == nil && len(f) > 0 {
+		return f[0]
+	}
+	return "?"
 }

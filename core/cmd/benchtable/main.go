@@ -58,7 +58,7 @@ func main() {
 		}
 		return
 	}
-	rows, err := measure(c)
+	rows, context, err := measure(c)
 	if err != nil {
 		fmt.Fprintln(os.Stderr, "benchtable:", err)
 		os.Exit(1)
@@ -66,6 +66,9 @@ func main() {
 	f, err := os.Create(c.out + "/table.md")
 	if err == nil {
 		err = writeTable(f, rows)
+		if err == nil {
+			_, err = fmt.Fprintf(f, "\n%s\n", context)
+		}
 		if cerr := f.Close(); err == nil {
 			err = cerr
 		}
@@ -77,4 +80,5 @@ func main() {
 	if err := writeTable(os.Stdout, rows); err != nil {
 		os.Exit(1)
 	}
+	fmt.Printf("\n%s\n", context)
 }

@@ -6,6 +6,7 @@ import (
 	"math"
 	"os"
 	"path/filepath"
+	"runtime"
 	"strings"
 
 	"quillcast/core/backtest"
@@ -14,6 +15,7 @@ import (
 
 // pageFigures is what the page measurements write to page.json.
 type pageFigures struct {
+	Load    string            `json:"load"`    // load average during the page runs
 	Workers int               `json:"workers"` // Web Workers used for the parallel rows
 	HWSSE   float64           `json:"hwSSE"`   // SSE of the page's Holt-Winters fit
 	Rows    map[string]sample `json:"rows"`
@@ -34,10 +36,11 @@ func readPage(dir string) (pageFigures, string) {
 
 // measure runs the native and reference measurements and joins them with
 // the page's into the table's rows.
-func measure(c config) ([]row, error) {
+func measure(c config) ([]row, string, error) {
+	startLoad := loadAverage()
 	in, err := readInputs(c.out)
 	if err != nil {
-		return nil, err
+		return nil, "", err
 	}
 	page, pageNote := readPage(c.out)
 	if pageNote != "" {
@@ -51,7 +54,7 @@ func measure(c config) ([]row, error) {
 	step("payload")
 	payload, err := payloadRows(c)
 	if err != nil {
-		return nil, err
+		return nil, "", err
 	}
 	rows = append(rows, payload...)
 
@@ -67,7 +70,7 @@ func measure(c config) ([]row, error) {
 	step("re-run after an edit")
 	native, err := nativeRerun(c.session, c.demo, 3*c.reps)
 	if err != nil {
-		return nil, err
+		return nil, "", err
 	}
 	for _, k := range []struct{ key, what string }{
 		{"rerun-last", "re-run after editing the demo's last step, in the page"},
@@ -88,27 +91,27 @@ func measure(c config) ([]row, error) {
 	step("window sweep")
 	raw, err := os.ReadFile(filepath.Join(c.out, walkFile))
 	if err != nil {
-		return nil, err
+		return nil, "", err
 	}
 	y, err := workload.ParseFloats(raw)
 	if err != nil {
-		return nil, err
+		return nil, "", err
 	}
 	widths := backtest.Range{From: in.From, To: in.To}
 	sweepNative, sw, err := nativeSweep(y, in.Train, widths, c.reps)
 	if err != nil {
-		return nil, err
+		return nil, "", err
 	}
 	var np numpyRun
 	if err := python(c.python, filepath.Join(c.scripts, "sweep_numpy.py"), &np, filepath.Join(c.out, walkFile), in.Train, in.From, in.To, c.reps); err != nil {
-		return nil, err
+		return nil, "", err
 	}
 	numpy := secondsOf(np.Seconds)
 	agree := sweepAgreement(sw, np)
 	step("plain O(n·w) loop")
 	plain, err := nativePlain(y, in.Train, widths, c.plainRep)
 	if err != nil {
-		return nil, err
+		return nil, "", err
 	}
 	sweepOne, sweepN, plainPage := pr("sweep-1"), pr("sweep-n"), pr("plain")
 	numpyVs := "numpy " + np.Version + " cumulative sums, natively"
@@ -138,23 +141,23 @@ func measure(c config) ([]row, error) {
 	step("Holt-Winters")
 	hwRaw, err := os.ReadFile(filepath.Join(c.out, hwFile))
 	if err != nil {
-		return nil, err
+		return nil, "", err
 	}
 	hy, err := workload.ParseFloats(hwRaw)
 	if err != nil {
-		return nil, err
+		return nil, "", err
 	}
 	hw, err := nativeHoltWinters(hy, in.Season, c.reps, 50, true)
 	if err != nil {
-		return nil, err
+		return nil, "", err
 	}
 	hwHeur, err := nativeHoltWinters(hy, in.Season, c.reps, 50, false)
 	if err != nil {
-		return nil, err
+		return nil, "", err
 	}
 	var sm statsRun
 	if err := python(c.python, filepath.Join(c.scripts, "hw_statsmodels.py"), &sm, filepath.Join(c.out, hwFile), in.Season, c.reps); err != nil {
-		return nil, err
+		return nil, "", err
 	}
 	smTime := secondsOf(sm.Seconds)
 	smVs := "statsmodels " + sm.Version + " ExponentialSmoothing().fit(), natively"
@@ -176,7 +179,7 @@ func measure(c config) ([]row, error) {
 	step("bake-off")
 	bo, nSeries, err := nativeBakeoff(c.competition, c.slowReps)
 	if err != nil {
-		return nil, err
+		return nil, "", err
 	}
 	boPage := pr("bakeoff")
 	txt = ""
@@ -193,7 +196,8 @@ func measure(c config) ([]row, error) {
 	if pageNote != "" {
 		rows[len(rows)-1].Note = joinNotes(rows[len(rows)-1].Note, pageNote)
 	}
-	return rows, nil
+	context := fmt.Sprintf("Measured on %d cores; load average %s when the native runs began, %s when they ended (page runs: %s). Figures from a shared machine are noisy: compare the ratios of one run.", runtime.NumCPU(), startLoad, loadAverage(), page.Load)
+	return rows, context, nil
 }
 
 // payloadRows measures the engine as built for the page and the bundle.
@@ -295,4 +299,18 @@ func breakdown(path string, shipped int) string {
 	}
 	parts = append(parts, fmt.Sprintf("not function code (data, type tables) %.2f MB", float64(shipped-code)/1e6))
 	return "function code by dependency, uncompressed: " + strings.Join(parts, ", ")
+}
+
+// loadAverage returns the one-minute load average of the machine, or "not
+// known" where /proc/loadavg is missing.
+func loadAverage() string {
+	b, err := os.ReadFile("/proc/loadavg")
+	if err != nil {
+		return "not known"
+	}
+	f := strings.Fields(string(b))
+	if len(f) == 0 {
+		return "not known"
+	}
+	return f[0]
 }
