@@ -60,6 +60,12 @@ func TestPackageGroup(t *testing.T) {
 		{"runtime.mallocgc", "Go runtime and standard library"},
 		{"encoding/json.Marshal", "Go runtime and standard library"},
 		{"golang.org/x/text/unicode.Foo", "other modules"},
+		// as the wasm linker writes them
+		{"gonum.org_v1_gonum_mat.__VecDense_.RawVector", "gonum"},
+		{"github.com_yuin_goldmark_ast.__Blockquote_.FirstChild", "goldmark"},
+		{"quillcast_core_steps_runner.__exec_.load", "quillcast/core/steps/runner"},
+		{"github.com_hack_pad_go_indexeddb_idb.__Cursor_.Key", "go-indexeddb and its helpers"},
+		{"runtime.__gcControl_.revise", "Go runtime and standard library"},
 	}
 	for _, tc := range tests {
 		t.Run(tc.fn, func(t *testing.T) {

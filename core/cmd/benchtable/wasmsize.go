@@ -222,26 +222,42 @@ func readNames(s *wasmReader, names map[int]string) error {
 
 // packageGroup names the dependency a Go function belongs to: gonum,
 // goldmark, go-indexeddb (with its JavaScript helpers), each package of
-// ours, or the Go runtime and standard library.
+// ours, or the Go runtime and standard library. The wasm linker writes
+// import paths with "_" for "/" and "-" (gonum.org_v1_gonum_mat.Foo); both
+// forms are understood.
 func packageGroup(fn string) string {
-	fn = strings.TrimPrefix(fn, "type:")
+	n := strings.ReplaceAll(strings.TrimPrefix(fn, "type:"), "_", "/")
 	switch {
-	case strings.HasPrefix(fn, "gonum.org/"):
+	case strings.HasPrefix(n, "gonum.org/"):
 		return "gonum"
-	case strings.HasPrefix(fn, "github.com/yuin/goldmark"):
+	case strings.HasPrefix(n, "github.com/yuin/goldmark"):
 		return "goldmark"
-	case strings.HasPrefix(fn, "github.com/hack-pad/"):
+	case strings.HasPrefix(n, "github.com/hack-pad/"), strings.HasPrefix(n, "github.com/hack/pad/"):
 		return "go-indexeddb and its helpers"
-	case strings.HasPrefix(fn, "main."):
+	case strings.HasPrefix(n, "main."):
 		return "quillcast/wasm"
-	case strings.HasPrefix(fn, "quillcast/"):
-		path := fn
-		if i := strings.IndexByte(path, '.'); i > 0 {
-			path = path[:i]
+	case strings.HasPrefix(n, "quillcast/"):
+		if i := strings.IndexByte(n, '.'); i > 0 {
+			n = n[:i]
 		}
-		return path
-	case strings.Contains(fn, "/") && strings.Contains(fn[:strings.IndexByte(fn, '/')], "."):
+		return n
+	case strings.Contains(n, "/") && isDomain(n[:strings.IndexByte(n, '/')]):
 		return "other modules"
 	}
 	return "Go runtime and standard library"
+}
+
+// isDomain reports whether the first element of an import path names a
+// host, such as golang.org, as module paths outside the standard library
+// start.
+func isDomain(seg string) bool {
+	if !strings.Contains(seg, ".") || strings.HasSuffix(seg, ".") || strings.HasPrefix(seg, ".") {
+		return false
+	}
+	for _, c := range seg {
+		if !(c >= 'a' && c <= 'z' || c >= '0' && c <= '9' || c == '.' || c == '-') {
+			return false
+		}
+	}
+	return true
 }
