@@ -116,7 +116,7 @@ async function save() {
   } catch (err) {
     root.dataset.saved = "failed";
     if (err instanceof EngineError && err.failure.code === "conflict") {
-      banner(err.message + ".",
+      banner(`Not saved: ${err.message}.`,
         el("button", { type: "button", onclick: () => { banner(""); openSession(session.id); } }, "Load the other tab's version"),
         el("button", { type: "button", onclick: async () => {
           banner(""); session.id = ""; session.version = 0; session.title += " (copy)"; $("doc-title").value = session.title; await save();

@@ -47,7 +47,11 @@ export function figureTable(header, rows, caption) {
   return table;
 }
 
-/** engineTable builds a table the engine sent: headers, rows, alignment. */
+/**
+ * engineTable builds a table the engine sent: headers, rows, alignment. It
+ * comes inside a box that scrolls sideways when the table is wider than
+ * the document, so labels need not break at their hyphens.
+ */
 export function engineTable(t) {
   const right = t.right || [];
   const table = el("table", { class: "figures" });
@@ -55,5 +59,5 @@ export function engineTable(t) {
     ...t.headers.map((h, i) => el("th", { scope: "col", class: right[i] ? "num" : null }, h)))));
   table.append(el("tbody", {}, ...t.rows.map((r) => el("tr", {},
     ...r.map((c, i) => el("td", { class: right[i] ? "num" : null }, c))))));
-  return table;
+  return el("div", { class: "table-box" }, table);
 }

@@ -5,6 +5,7 @@ package store
 import (
 	"errors"
 	"fmt"
+	"syscall/js"
 
 	"github.com/hack-pad/go-indexeddb/idb"
 )
@@ -27,26 +28,33 @@ var ErrUnavailable = errors.New("this browser offers no lasting storage to this 
 // and did not close it when asked.
 var ErrBlocked = errors.New("another Quillcast tab keeps the stored sessions open with an older layout; close the other Quillcast tabs and reload this page")
 
-// The browser's names for the storage errors a user can act on.
-var (
-	quotaExceeded = idb.NewDOMException("QuotaExceededError")
-	invalidState  = idb.NewDOMException("InvalidStateError")
-	unknownError  = idb.NewDOMException("UnknownError")
-	abortError    = idb.NewDOMException("AbortError")
-)
-
 // explain turns storage errors a user can act on into plain advice; other
-// errors, and nil, pass through.
+// errors, and nil, pass through. The browser's exception may reach it as a
+// go-indexeddb DOMException or, when a call threw it, as a js.Error.
 func explain(err error) error {
 	switch {
 	case err == nil:
 		return nil
-	case errors.Is(err, quotaExceeded):
+	case named(err, "QuotaExceededError"):
 		return fmt.Errorf("%w (%v)", ErrQuota, err)
-	case errors.Is(err, invalidState):
+	case named(err, "InvalidStateError"):
 		return fmt.Errorf("the stored data was closed, perhaps by another tab that updated Quillcast; reload this page (%w)", err)
-	case errors.Is(err, unknownError), errors.Is(err, abortError):
+	case named(err, "UnknownError"), named(err, "AbortError"):
 		return fmt.Errorf("the browser's storage failed; your work is still on the page, so save it as a file before reloading (%w)", err)
 	}
 	return err
+}
+
+// named reports whether err is the browser exception called name (such as
+// "QuotaExceededError").
+func named(err error, name string) bool {
+	if errors.Is(err, idb.NewDOMException(name)) {
+		return true
+	}
+	var je js.Error
+	if errors.As(err, &je) && je.Value.Type() == js.TypeObject {
+		n := je.Value.Get("name")
+		return n.Type() == js.TypeString && n.String() == name
+	}
+	return false
 }
