@@ -123,3 +123,25 @@ func FuzzCodeByPackage(f *testing.F) {
 		_, _ = codeByPackage(b)
 	})
 }
+
+func TestFaster(t *testing.T) {
+	s := func(v float64) sample { return sample{Values: []float64{v}, Unit: "s"} }
+	tests := []struct {
+		name        string
+		ours, other sample
+		want        string
+	}{
+		{"faster", s(0.2), s(0.9), "4.50× faster"},     // hand calculation: 0.9/0.2
+		{"just short", s(0.5), s(0.89), "1.78× faster"}, // 0.89/0.5, not rounded up to 1.8
+		{"much faster", s(0.25), s(70), "280.0× faster"},
+		{"slower", s(2), s(1), "2.00× slower"},
+		{"missing", sample{}, s(1), ""},
+	}
+	for _, tc := range tests {
+		t.Run(tc.name, func(t *testing.T) {
+			if got, _ := faster(tc.ours, tc.other); got != tc.want {
+				t.Errorf("faster(%v, %v) = %q, want %q", tc.ours.Values, tc.other.Values, got, tc.want)
+			}
+		})
+	}
+}

@@ -40,9 +40,18 @@ func faster(ours, other sample) (string, float64) {
 	}
 	r := other.median() / ours.median()
 	if r < 1 {
-		return fmt.Sprintf("%.1f× slower", 1/r), r
+		return fmt.Sprintf("%s× slower", times(1/r)), r
 	}
-	return fmt.Sprintf("%.1f× faster", r), r
+	return fmt.Sprintf("%s× faster", times(r)), r
+}
+
+// times shows a ratio with two decimals below 10 (so that 1.78 is not
+// shown as the 1.8 it misses) and one above.
+func times(r float64) string {
+	if r < 10 {
+		return fmt.Sprintf("%.2f", r)
+	}
+	return fmt.Sprintf("%.1f", r)
 }
 
 // writeTable prints rows as a markdown table followed by the notes.
