@@ -131,7 +131,7 @@ func TestFaster(t *testing.T) {
 		ours, other sample
 		want        string
 	}{
-		{"faster", s(0.2), s(0.9), "4.50× faster"},     // hand calculation: 0.9/0.2
+		{"faster", s(0.2), s(0.9), "4.50× faster"},      // hand calculation: 0.9/0.2
 		{"just short", s(0.5), s(0.89), "1.78× faster"}, // 0.89/0.5, not rounded up to 1.8
 		{"much faster", s(0.25), s(70), "280.0× faster"},
 		{"slower", s(2), s(1), "2.00× slower"},
