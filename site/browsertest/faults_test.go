@@ -149,7 +149,7 @@ func storedSession(p *page) string {
 func TestReloadDuringSave(t *testing.T) {
 	p := openSite(t)
 	p.open("")
-	for _, delay := range []int{0, 2, 10, 40} {
+	for _, delay := range []int{0, 5, 40} {
 		t.Run(fmt.Sprintf("after %d ms", delay), func(t *testing.T) {
 			before := storedSession(p)
 			version, text, _ := strings.Cut(before, "|")
