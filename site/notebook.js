@@ -165,9 +165,7 @@ export class Notebook {
       const where = out.error.column ? `Step ${out.step}, column ${out.error.column}: ` : `Step ${out.step}: `;
       box.append(el("p", { class: "msg error", role: "note" }, where + out.error.message));
     }
-    if (out.status === "waiting") {
-      box.append(el("p", { class: "msg waiting" }, `Waits on step ${out.waitsOn}, which has a problem.`));
-    }
+    // A waiting step's reason arrives as a message block from the engine.
     for (const b of out.blocks || []) {
       if (b.kind === "message") {
         box.append(el("p", { class: `msg ${b.level || "info"}` }, b.text));

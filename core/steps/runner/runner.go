@@ -198,7 +198,7 @@ func fail(st *state, s *steps.Step, out Output, err *steps.Error) (*state, Outpu
 func wait(st *state, s *steps.Step, out Output, on int) (*state, Output) {
 	out.Status, out.WaitsOn = Waiting, on
 	out.Blocks = []Block{{Kind: MessageBlock, Level: Warning,
-		Text: fmt.Sprintf("waits on step %d, which failed; fix that step and this one runs again", on)}}
+		Text: fmt.Sprintf("Waits on step %d, which failed; fix that step and this one runs again.", on)}}
 	return broken(st, s, on), out
 }
 

@@ -71,8 +71,8 @@ var verbTests = []struct {
 	{"check a forecast's residuals", base + "forecast seasonal-naive as=sn\ncheck sn", Done, 0, 2, []string{"residuals"}},
 	{"pick the best", base + "forecast naive\nforecast holt-winters as=hw\npick by=rmse", Done, 0, 0, []string{"Recommended: hw has the best RMSE"}},
 	{"bake-off across shops", "load shops.csv\nbakeoff methods=naive,seasonal-naive,ses last=12", Done, 1, 0, []string{"Bake-off over 3 series", "wins by MASE"}},
-	{"a step waits on a failed load", "load nothing.csv\nsplit last=3", Waiting, 0, 0, []string{"waits on step 1, which failed"}},
-	{"evaluate waits on a failed forecast", "load flat.csv\nsplit last=40\nforecast holt-winters as=hw\nevaluate", Waiting, 0, 0, []string{"waits on step 3"}},
+	{"a step waits on a failed load", "load nothing.csv\nsplit last=3", Waiting, 0, 0, []string{"Waits on step 1, which failed"}},
+	{"evaluate waits on a failed forecast", "load flat.csv\nsplit last=40\nforecast holt-winters as=hw\nevaluate", Waiting, 0, 0, []string{"Waits on step 3"}},
 }
 
 func TestVerbs(t *testing.T) {
