@@ -44,8 +44,8 @@ var columns = [...]string{"series", "category", "period", "value", "role"}
 // competition files: series.Read must read the file twice (fit rows, then
 // test rows) and detect what this layout fixes, which measured 57% slower
 // with twice the bytes allocated on the 756-series quarterly competition
-// file (13.9 against 21.9 ms), and it
-// cannot say which line puts a fit row after a test row.
+// file (13.9 against 21.9 ms), and it cannot say which line puts a fit row
+// after a test row.
 func Read(r io.Reader) ([]Series, error) {
 	cr := csv.NewReader(r)
 	cr.FieldsPerRecord = -1
