@@ -17,6 +17,8 @@ const root = document.documentElement;
 
 /** state of the open session. */
 const session = { id: "", title: "", text: "", version: 0, parts: [] };
+/** stored is the title and text of the session as last saved or opened. */
+const stored = { title: null, text: null };
 let saveTimer = 0;
 let runSeq = 0;
 
@@ -100,17 +102,25 @@ async function stopRun() {
 /** scheduleSave saves the session within a second of the last edit. */
 function scheduleSave() {
   clearTimeout(saveTimer);
+  if (session.id && session.text === stored.text && session.title === stored.title) {
+    // Nothing changed since the stored version (a re-run, say): writing
+    // it again would only raise the version another tab compares with.
+    root.dataset.saved = String(session.version);
+    return;
+  }
   root.dataset.saved = "pending";
   saveTimer = setTimeout(save, 400);
 }
 
 async function save() {
   try {
+    const { title, text } = session;
     const saved = await call("saveSession", JSON.stringify({
-      id: session.id, title: session.title, text: session.text, datasets: [], version: session.version,
+      id: session.id, title, text, datasets: [], version: session.version,
     }));
     session.id = saved.id;
     session.version = saved.version;
+    Object.assign(stored, { title, text });
     root.dataset.saved = String(saved.version);
     await listSessions();
   } catch (err) {
@@ -156,6 +166,7 @@ async function listDatasets() {
 async function openSession(id) {
   const s = await call("openSession", id);
   Object.assign(session, { id: s.id, title: s.title, text: s.text, version: s.version });
+  Object.assign(stored, { title: s.title, text: s.text });
   $("doc-title").value = s.title;
   const parts = await call("parts", s.text);
   notebook.undo = []; notebook.redo = [];
