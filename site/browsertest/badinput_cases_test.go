@@ -145,7 +145,8 @@ func stepCases() []badCase {
 		{name: "forecast with no split", lines: with("forecast holt-winters"), want: "`forecast` needs a `split` first"},
 		{name: "multiplicative season on zeros", lines: []string{"load zeros.csv", "split last=6", "forecast holt-winters season=multiplicative"}, want: "holt-winters needs positive values"},
 		{name: "multiplicative season on negatives", lines: []string{"load negative.csv", "decompose multiplicative"}, want: "needs values above zero"},
-		{name: "MAPE on zeros", lines: []string{"load zeros.csv", "split last=6", "forecast naive", "evaluate by=mape"}, want: "MAPE"},
+		{name: "MAPE on zeros", lines: []string{"load zeros.csv", "split last=6", "forecast naive", "evaluate by=mape"}, want: "No forecast has a defined MAPE % on the validation period"},
+		{name: "MASE on a constant series", lines: []string{"load constant.csv", "split last=6", "forecast naive", "evaluate by=mase"}, want: "No forecast has a defined MASE on the validation period"},
 		{name: "one-point series loaded", lines: []string{"load one-point.csv"}, want: "has 1 value; forecasting needs at least 3"},
 		{name: "three-point series held out", lines: []string{"load three-point.csv", "split last=2"}, want: "so hold out at most 1"},
 		{name: "holt-winters on a quarterly series too short", lines: []string{"load three-point.csv", "split last=1", "forecast holt-winters"}, want: "holt-winters needs at least"},
@@ -158,6 +159,7 @@ func stepCases() []badCase {
 func stepFiles() map[string][]byte {
 	return map[string][]byte{
 		"zeros.csv":       monthRows(repeated(36, "0")...),
+		"constant.csv":    monthRows(repeated(36, "42")...),
 		"negative.csv":    monthRows(repeated(36, "-5")...),
 		"one-point.csv":   monthRows("5"),
 		"three-point.csv": monthRows("5", "7", "6"),
