@@ -62,3 +62,17 @@ func TestProgressText(t *testing.T) {
 		})
 	}
 }
+
+// TestBakeoffProgress checks that a bake-off reports its series one by one.
+func TestBakeoffProgress(t *testing.T) {
+	t.Parallel()
+	var parts []int
+	New().RunWith(t.Context(), sessionFile(t, "shops-bakeoff.md"), demoData(t), Options{Progress: func(p Progress) {
+		if p.Verb == "bakeoff" && p.Parts > 0 {
+			parts = append(parts, p.Part)
+		}
+	}})
+	if len(parts) < 2 || parts[len(parts)-1] != len(parts) {
+		t.Errorf("the bake-off reported series done %v; want 1, 2, … up to every series", parts)
+	}
+}
