@@ -37,7 +37,7 @@ func (b Bars) SVG() string {
 	empty := !vr.ok
 	desc := b.describe(labels, vr)
 	vr.add(0)
-	c := newCanvas(b.Frame, w, h, desc, 96*n*max(len(b.Series), 1))
+	c := newCanvas(b.Frame, w, h, desc, 96*min(n, 4*w)*max(len(b.Series), 1))
 	top := 10.0
 	if b.Title != "" {
 		top = titleHeight
@@ -76,6 +76,11 @@ func drawBarGroups(c *canvas, p periodAxis, ax axis, series []Series) {
 	for j, s := range series {
 		slot := j
 		c.s(`<g class="` + fill(slot) + ` qc-bar">` + "\n")
+		if spans, ok := barSpans(p.n, p.ar.width(), s.Values); ok {
+			drawSpans(c, p, ax, spans, j, k, "")
+			c.s("</g>\n")
+			continue
+		}
 		for i := 0; i < p.n; i++ {
 			v := at(s.Values, i)
 			if !finite(v) {
@@ -109,6 +114,31 @@ func drawBarGroups(c *canvas, p periodAxis, ax axis, series []Series) {
 				c.marker(slot, x, y+off, 3)
 			}
 		}
+	}
+}
+
+// drawSpans writes the bars of a long series, one per pixel column from
+// zero to the column's extremes (see decimate.go); series j of k takes the
+// j-th share of the column. class is written on each bar when not empty.
+func drawSpans(c *canvas, p periodAxis, ax axis, spans []span, j, k int, class string) {
+	for _, sp := range spans {
+		left, right := p.edge(sp.lo), p.edge(sp.hi)
+		w := (right - left) / float64(k)
+		top := clampY(ax.y(sp.max, p.ar), p.ar)
+		bottom := clampY(ax.y(sp.min, p.ar), p.ar)
+		c.s(`<rect x="`)
+		c.num(left + float64(j)*w)
+		c.s(`" y="`)
+		c.num(top)
+		c.s(`" width="`)
+		c.num(max(w, 0.4))
+		c.s(`" height="`)
+		c.num(max(bottom-top, 0.5))
+		if class != "" {
+			c.s(`" class="`)
+			c.s(class)
+		}
+		c.s(`"/>` + "\n")
 	}
 }
 

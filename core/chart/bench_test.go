@@ -84,3 +84,20 @@ func BenchmarkPanels(b *testing.B) {
 		})
 	}
 }
+
+// BenchmarkLineLong draws the actual series alone over long spans, as the
+// load and split steps do for a large file: above four points per plot
+// pixel the line is drawn from a bounded number of points.
+func BenchmarkLineLong(b *testing.B) {
+	for _, n := range []int{1000, 10000, 100000, 1000000} {
+		l := Line{Frame: Frame{Title: "orders"}, Series: []Series{{Name: "orders", Values: orders(n, 1)}}, HoldoutStart: n - n/5}
+		b.Run(fmt.Sprintf("n=%d", n), func(b *testing.B) {
+			b.ReportAllocs()
+			size := 0
+			for b.Loop() {
+				size = len(l.SVG())
+			}
+			b.ReportMetric(float64(size), "svg-bytes")
+		})
+	}
+}

@@ -49,7 +49,7 @@ func (l Line) SVG() string {
 	if l.ZeroLine {
 		vr.add(0)
 	}
-	c := newCanvas(l.Frame, w, h, l.describe(labels, vr), 64*n*max(len(l.Series), 1))
+	c := newCanvas(l.Frame, w, h, l.describe(labels, vr), 64*min(n, 10*w)*max(len(l.Series), 1))
 	top := 10.0
 	if l.Title != "" {
 		top = titleHeight

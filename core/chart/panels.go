@@ -47,7 +47,7 @@ func (ps Panels) SVG() string {
 		bottomRoom += 18
 	}
 	w, h := frameSize(ps.Frame, 720, int(top+panelHeight*float64(k)+bottomRoom))
-	c := newCanvas(ps.Frame, w, h, ps.describe(labels), 64*n*k)
+	c := newCanvas(ps.Frame, w, h, ps.describe(labels), 64*min(n, 10*w)*k)
 	slotH := (float64(h) - top - bottomRoom) / float64(k)
 	// Every panel shares the left margin of the widest tick labels.
 	axes := make([]axis, len(ps.Parts))
@@ -87,7 +87,9 @@ func (ps Panels) SVG() string {
 			y0 := ax.y(0, ar)
 			c.s(`<g class="` + fill(i) + ` qc-bar">` + "\n")
 			bw := max(pa.step()*0.6, 0.8)
-			for j := 0; j < n; j++ {
+			spans, long := barSpans(n, ar.width(), p.Values)
+			drawSpans(c, pa, ax, spans, 0, 1, fill(i))
+			for j := 0; j < n && !long; j++ {
 				v := at(p.Values, j)
 				if finite(v) {
 					c.rect(pa.x(j)-bw/2, y0, bw, clampY(ax.y(v, ar), ar)-y0, fill(i))

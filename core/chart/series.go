@@ -75,54 +75,53 @@ func bandClass(level float64) string {
 	return "qc-band80"
 }
 
-// drawBands shades each band of s over the runs where both bounds exist.
+// drawBands shades each band of s over the runs where both bounds exist;
+// a long series is shaded between its thinned bounds (see decimate.go).
 func drawBands(c *canvas, p periodAxis, ax axis, s Series, slot int) {
 	slot = max(slot, 0)
 	for _, b := range sortedBands(s.Bands) {
-		var runs [][2]int
-		start := -1
-		for i := 0; i <= p.n; i++ {
-			ok := i < p.n && finite(at(b.Lower, i)) && finite(at(b.Upper, i))
-			if ok && start < 0 {
-				start = i
-			}
-			if !ok && start >= 0 {
-				runs = append(runs, [2]int{start, i})
-				start = -1
-			}
-		}
-		if len(runs) == 0 {
+		valid := func(i int) bool { return finite(at(b.Lower, i)) && finite(at(b.Upper, i)) }
+		upper := drawnPositions(p.n, p.ar.width(), valid, func(i int) float64 { return b.Upper[i] })
+		if len(upper) == 0 {
 			continue
 		}
+		lower := drawnPositions(p.n, p.ar.width(), valid, func(i int) float64 { return b.Lower[i] })
+		var lowRuns [][]int
+		pieces(lower, func(run []int) { lowRuns = append(lowRuns, run) })
 		c.s(`<path class="`)
 		c.s(fill(slot))
 		c.s(" ")
 		c.s(bandClass(b.Level))
 		c.s(`" d="`)
-		for _, r := range runs {
+		k := 0
+		pieces(upper, func(up []int) {
+			low := lowRuns[min(k, len(lowRuns)-1)]
+			k++
 			half := 0.0
-			if r[1]-r[0] == 1 {
+			if len(up) == 1 && len(low) == 1 {
 				half = p.step() * 0.3 // a lone period still shows a sliver
 			}
-			c.moveTo(p.x(r[0])-half, clampY(ax.y(b.Upper[r[0]], p.ar), p.ar))
-			for i := r[0]; i < r[1]; i++ {
+			c.moveTo(p.x(up[0])-half, clampY(ax.y(b.Upper[up[0]], p.ar), p.ar))
+			for _, i := range up {
 				c.lineTo(p.x(i)+half, clampY(ax.y(b.Upper[i], p.ar), p.ar))
 			}
-			for i := r[1] - 1; i >= r[0]; i-- {
+			for j := len(low) - 1; j >= 0; j-- {
+				i := low[j]
 				c.lineTo(p.x(i)+half, clampY(ax.y(b.Lower[i], p.ar), p.ar))
-				if i == r[0] && half > 0 {
+				if j == 0 && half > 0 {
 					c.lineTo(p.x(i)-half, clampY(ax.y(b.Lower[i], p.ar), p.ar))
 				}
 			}
 			c.s("Z")
-		}
+		})
 		c.s(`"/>` + "\n")
 	}
 }
 
 // drawSeriesLine writes the line of s, broken at gaps, then a dot for any
 // lone point between gaps and, when markers is set, the slot's marker at
-// every point of a short series or every k-th point of a long one.
+// every point of a short series or every k-th point of a long one. A long
+// series is drawn through its thinned points (see decimate.go).
 func drawSeriesLine(c *canvas, p periodAxis, ax axis, s Series, slot int, markers bool) {
 	class := "qc-line "
 	switch {
@@ -140,28 +139,25 @@ func drawSeriesLine(c *canvas, p periodAxis, ax axis, s Series, slot int, marker
 		c.dashAttr(slot)
 	}
 	c.s(` d="`)
-	down := false
+	drawn := drawnPositions(p.n, p.ar.width(), func(i int) bool { return finite(at(s.Values, i)) },
+		func(i int) float64 { return s.Values[i] })
 	var lone []int
+	pieces(drawn, func(run []int) {
+		c.moveTo(p.x(run[0]), clampY(ax.y(s.Values[run[0]], p.ar), p.ar))
+		if len(run) == 1 {
+			lone = append(lone, run[0])
+		}
+		for _, i := range run[1:] {
+			c.lineTo(p.x(i), clampY(ax.y(s.Values[i], p.ar), p.ar))
+		}
+	})
+	c.s(`"/>` + "\n")
 	points := 0
 	for i := 0; i < p.n; i++ {
-		v := at(s.Values, i)
-		if !finite(v) {
-			down = false
-			continue
+		if finite(at(s.Values, i)) {
+			points++
 		}
-		points++
-		y := clampY(ax.y(v, p.ar), p.ar)
-		if down {
-			c.lineTo(p.x(i), y)
-		} else {
-			c.moveTo(p.x(i), y)
-			if !finite(at(s.Values, i+1)) {
-				lone = append(lone, i)
-			}
-		}
-		down = true
 	}
-	c.s(`"/>` + "\n")
 	stride := 0
 	if markers && slot >= 0 {
 		stride = 1
