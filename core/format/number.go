@@ -95,7 +95,8 @@ func Auto(v float64) string {
 
 // Decimals returns how many digits after the point suit a value of v's size:
 // 0 from 1,000 up, 1 from 10, 2 from 1, and for smaller values enough digits
-// to show three significant ones (0.0123 gets 4), at most 6. Zero, NaN and
+// to show three significant ones (0.0123 gets 4), at most 12, so values down
+// to 1e-9 keep three significant digits. Zero, NaN and
 // ±Inf get 2.
 func Decimals(v float64) int {
 	a := math.Abs(v)
@@ -110,7 +111,7 @@ func Decimals(v float64) int {
 		return 2
 	}
 	d := 2 - int(math.Floor(math.Log10(a)))
-	return min(d, 6)
+	return min(d, 12)
 }
 
 // ColumnDecimals returns one decimals count for a whole column of values, so
