@@ -103,4 +103,3 @@ func (f esForm) sseGradForward(y []float64, p [nConst]float64, init esStates, w 
 	}
 	return sse
 }
-
