@@ -54,11 +54,21 @@ async function run(parts) {
   const seq = ++runSeq;
   setStatus("Running the steps…");
   showProgress(null);
-  const res = await call("run", JSON.stringify(parts));
+  const text = JSON.stringify(parts);
+  // Outputs the notebook still shows come back without their exhibits.
+  let res = await call("run", text, JSON.stringify(notebook.heldKeys()));
   if (seq !== runSeq) return null; // a newer edit is on its way
+  let outputs = notebook.filled(res.result.outputs);
+  if (!outputs) {
+    // An output marked kept is no longer drawn: ask for all of them (every
+    // step's result is reused, so this costs no computing).
+    res = await call("run", text);
+    if (seq !== runSeq) return null;
+    outputs = res.result.outputs;
+  }
   session.text = res.text;
   session.parts = res.parts;
-  notebook.show(res.parts, res.result.outputs);
+  notebook.show(res.parts, outputs);
   const n = res.result.errors ? res.result.errors.length : 0;
   setStatus(n === 0 ? "All steps ran. Everything stays on this computer." : `${n} step${n === 1 ? " has a problem" : "s have problems"}; see the marked lines.`, n > 0);
   return res;

@@ -13,16 +13,49 @@ export class Notebook {
     this.complete = complete; // async (line, column) => suggestions
     this.parts = [];
     this.outputs = new Map(); // document line -> output
+    // Outputs as drawn, by the engine's output key: an output whose key
+    // comes back from a later run is shown again from here (its blocks are
+    // not sent again) and its exhibits are not rebuilt.
+    this.drawn = new Map(); // key -> {out, box}
+    this.rows = new Map(); // notes and step rows as drawn, by what they show
+    this.blocks = new Map(); // steps block elements by part index
     this.undo = [];
     this.redo = [];
     root.addEventListener("keydown", (e) => this.onKey(e));
   }
 
-  /** show replaces the parts and outputs and redraws, keeping the focus. */
+  /** heldKeys lists the keys of the outputs drawn, for the engine's run. */
+  heldKeys() {
+    return [...this.drawn.keys()];
+  }
+
+  /**
+   * filled returns the outputs of a run with each output the engine marked
+   * kept (sent without its blocks) completed from the one drawn before, or
+   * null when one of them is no longer held.
+   */
+  filled(outputs) {
+    const full = [];
+    for (const o of outputs || []) {
+      if (!o.kept) { full.push(o); continue; }
+      const d = this.drawn.get(o.key);
+      if (!d) return null;
+      full.push({ ...o, blocks: d.out.blocks, kept: false });
+    }
+    return full;
+  }
+
+  /**
+   * show replaces the parts and outputs and redraws, keeping the focus.
+   * Outputs must be complete (see filled). Drawn outputs whose keys are
+   * gone are forgotten.
+   */
   show(parts, outputs) {
     const focus = this.focusedPlace();
     this.parts = parts;
     this.outputs = new Map((outputs || []).map((o) => [o.line, o]));
+    const keys = new Set((outputs || []).map((o) => o.key));
+    for (const k of this.drawn.keys()) if (!keys.has(k)) this.drawn.delete(k);
     this.render();
     if (focus) this.focusPlace(focus.part, focus.line, focus.editing);
   }
@@ -58,16 +91,36 @@ export class Notebook {
     return JSON.parse(JSON.stringify(this.parts));
   }
 
+  /**
+   * render brings the page up to the parts and outputs. A note or step row
+   * drawn earlier from the same text and output is kept in place untouched
+   * (its charts are neither parsed nor laid out again); only rows that
+   * differ are built and swapped in.
+   */
   render() {
+    const rows = new Map();
+    const blocks = new Map();
     const nodes = [];
+    const reuse = (sig, make) => {
+      const n = this.rows.get(sig) || make();
+      rows.set(sig, n);
+      return n;
+    };
     this.parts.forEach((p, i) => {
-      if (p.kind === "prose") nodes.push(this.prose(p, i));
-      else if (p.kind === "steps") nodes.push(this.stepsBlock(p, i));
+      if (p.kind === "prose") nodes.push(reuse(JSON.stringify(["prose", i, p.text, p.html]), () => this.prose(p, i)));
+      else if (p.kind === "steps") nodes.push(this.stepsBlock(p, i, reuse, blocks));
       else if (p.kind === "data") {
-        nodes.push(el("p", { class: "embedded" }, `Embedded data: ${p.name}`));
+        nodes.push(reuse(JSON.stringify(["data", i, p.name]), () => el("p", { class: "embedded" }, `Embedded data: ${p.name}`)));
       }
     });
-    this.root.replaceChildren(...nodes);
+    this.rows = rows;
+    this.blocks = blocks;
+    reconcile(this.root, nodes);
+  }
+
+  /** forget drops the drawn row or note holding node, which an editor is replacing. */
+  forget(node) {
+    for (const [sig, n] of this.rows) if (n === node || n.contains(node)) this.rows.delete(sig);
   }
 
   prose(p, i) {
@@ -104,13 +157,19 @@ export class Notebook {
       if (e.key === "Escape") { e.preventDefault(); e.stopPropagation(); finish(); }
     });
     area.addEventListener("blur", finish);
+    this.forget(view);
     view.replaceWith(area);
     area.focus();
   }
 
-  stepsBlock(p, i) {
-    const block = el("div", { class: "steps", "data-part": i });
-    (p.lines || []).forEach((line, j) => block.append(this.stepRow(line, i, j)));
+  stepsBlock(p, i, reuse, blocks) {
+    const block = this.blocks.get(i) || el("div", { class: "steps", "data-part": i });
+    blocks.set(i, block);
+    reconcile(block, (p.lines || []).map((line, j) => {
+      const out = this.outputs.get(line.line);
+      const sig = JSON.stringify(["step", i, j, line.text, out ? [out.key, out.step, out.status, out.verb, out.error, out.waitsOn, out.key ? "" : out.blocks] : null]);
+      return reuse(sig, () => this.stepRow(line, i, j));
+    }));
     return block;
   }
 
@@ -157,7 +216,16 @@ export class Notebook {
     return nodes;
   }
 
+  /** outputOf returns the output's box: the one drawn before for its key, or a new one. */
   outputOf(out) {
+    const d = out.key ? this.drawn.get(out.key) : null;
+    if (d) return d.box;
+    const box = this.drawOutput(out);
+    if (out.key) this.drawn.set(out.key, { out, box });
+    return box;
+  }
+
+  drawOutput(out) {
     const box = el("div", { class: "output" });
     if (out.status === "failed" && out.error) {
       // Steps are what the page shows, so the place is told by step and
@@ -248,6 +316,7 @@ export class Notebook {
       }
     });
     input.addEventListener("blur", () => setTimeout(() => { if (!done && !wrap.contains(document.activeElement)) apply(); }, 0));
+    this.forget(code);
     code.replaceWith(wrap);
     input.focus();
     suggest();
@@ -340,4 +409,18 @@ export class Notebook {
       this.change(parts, to);
     }
   }
+}
+
+/**
+ * reconcile makes nodes the element children of parent, in order, moving
+ * only what must move: children not among nodes are removed first, so the
+ * kept ones stay where they are and new ones are inserted between them.
+ */
+function reconcile(parent, nodes) {
+  const keep = new Set(nodes);
+  for (const c of [...parent.children]) if (!keep.has(c)) c.remove();
+  nodes.forEach((n, k) => {
+    const at = parent.children[k];
+    if (at !== n) parent.insertBefore(n, at || null);
+  });
 }

@@ -140,3 +140,60 @@ func TestFailureData(t *testing.T) {
 		})
 	}
 }
+
+// TestRunSendsChangedOnly checks that a run leaves out the blocks of the
+// outputs the page says it holds, and only of those.
+func TestRunSendsChangedOnly(t *testing.T) {
+	a := testApp()
+	if _, err := a.attach([]js.Value{bytesValue(ordersCSV), js.ValueOf("orders.csv")}); err != nil {
+		t.Fatal(err)
+	}
+	session := func(last string) string {
+		return `[{"kind":"steps","lines":[{"text":"load orders.csv value=units date=month"},{"text":"` + last + `"}]}]`
+	}
+	run := func(parts string, held []string) pageResult {
+		t.Helper()
+		args := []js.Value{js.ValueOf(parts)}
+		if held != nil {
+			b, _ := json.Marshal(held)
+			args = append(args, js.ValueOf(string(b)))
+		}
+		v, err := a.runSession(args)
+		if err != nil {
+			t.Fatal(err)
+		}
+		return v.(ran).Result
+	}
+	first := run(session("split last=2"), nil)
+	var keys []string
+	for _, o := range first.Outputs {
+		if o.Kept || len(o.Blocks) == 0 || o.Key == "" {
+			t.Fatalf("first run, step %d: kept %v, %d blocks, key %q; want every block and a key", o.Step, o.Kept, len(o.Blocks), o.Key)
+		}
+		keys = append(keys, o.Key)
+	}
+	tests := []struct {
+		name string
+		last string
+		held []string
+		kept []bool // per step
+	}{
+		{"the page holds nothing", "split last=2", []string{}, []bool{false, false}},
+		{"same session, all held", "split last=2", keys, []bool{true, true}},
+		{"last step edited", "split last=3", keys, []bool{true, false}},
+		{"unknown keys", "split last=2", []string{"0123456789abcdef"}, []bool{false, false}},
+	}
+	for _, tc := range tests {
+		t.Run(tc.name, func(t *testing.T) {
+			res := run(session(tc.last), tc.held)
+			for i, o := range res.Outputs {
+				if o.Kept != tc.kept[i] || (o.Kept && o.Blocks != nil) || (!o.Kept && len(o.Blocks) == 0) {
+					t.Errorf("step %d: kept %v with %d blocks, want kept %v", i+1, o.Kept, len(o.Blocks), tc.kept[i])
+				}
+			}
+		})
+	}
+	if _, err := a.runSession([]js.Value{js.ValueOf(session("split last=2")), js.ValueOf("[1,")}); err == nil {
+		t.Error("a garbled list of held outputs was accepted")
+	}
+}

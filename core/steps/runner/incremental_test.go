@@ -149,3 +149,44 @@ func TestCancelled(t *testing.T) {
 		t.Errorf("after the stop: computed %d, step 2 %s", again.Computed, again.Outputs[1].Status)
 	}
 }
+
+// TestOutputKeys checks that an output keeps its key exactly while its
+// step and the steps before it are unchanged, and that a step cut short by
+// a stop has none.
+func TestOutputKeys(t *testing.T) {
+	t.Parallel()
+	data := demoData(t)
+	text := sessionFile(t, "demo.md").String()
+	r := New()
+	first := r.Run(t.Context(), session.Parse(text), data)
+	seen := map[string]bool{}
+	for _, o := range first.Outputs {
+		if o.Key == "" || seen[o.Key] {
+			t.Fatalf("step %d: key %q is empty or repeated", o.Step, o.Key)
+		}
+		seen[o.Key] = true
+	}
+	for _, tc := range incrementalTests {
+		t.Run(tc.name, func(t *testing.T) {
+			res := New().Run(t.Context(), session.Parse(tc.edit(text)), data)
+			changed := 0
+			for i, o := range res.Outputs {
+				if o.Key != first.Outputs[i].Key {
+					changed++
+				} else if got, want := blockTexts(o), blockTexts(first.Outputs[i]); got != want {
+					t.Errorf("step %d keeps its key but its output changed", i+1)
+				}
+			}
+			if changed != tc.computed {
+				t.Errorf("%d keys changed, want %d (the steps an edit runs again)", changed, tc.computed)
+			}
+		})
+	}
+	ctx, cancel := context.WithCancel(t.Context())
+	cancel()
+	for _, o := range New().Run(ctx, stepsDoc("load orders.csv\nsplit last=12"), testData()).Outputs {
+		if o.Key != "" {
+			t.Errorf("step %d of a stopped run has key %q, want none", o.Step, o.Key)
+		}
+	}
+}

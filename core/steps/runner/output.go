@@ -39,6 +39,14 @@ type Output struct {
 	Error   *steps.Error `json:"error,omitempty"`
 	WaitsOn int          `json:"waitsOn,omitempty"` // the failed step this one waits on
 	Blocks  []Block      `json:"blocks"`
+	// Key names what the step computed: it is derived from this step and
+	// every step before it (and the files they load), so two outputs with
+	// the same Key have the same Status, Error, WaitsOn and Blocks; only
+	// Line and Text may differ, after an edit that moves the step. A
+	// re-run that reuses a step's result gives it the same Key, which lets
+	// a caller keep what it drew from the earlier output. Key is empty for
+	// a step cut short by cancellation, whose output is never reused.
+	Key string `json:"key,omitempty"`
 }
 
 // Block is one piece of a step's output: a table, a chart or a message.

@@ -71,13 +71,14 @@ func (r *Runner) RunWith(ctx context.Context, doc *session.Document, data Data, 
 			continue
 		}
 		after, out := r.runStep(ctx, st, s, data, rep, i)
-		res.add(out)
 		res.Computed++
 		if ctx.Err() == nil {
 			// A step cut short by cancellation is not kept: the next
 			// run does it properly.
+			out.Key = outputKey(key)
 			next[key] = cached{after: after, out: out}
 		}
+		res.add(out)
 		st = after
 	}
 	r.cache = next
@@ -110,6 +111,10 @@ func stepKey(prev string, s *steps.Step, data Data) string {
 	}
 	return hex.EncodeToString(h.Sum(nil))
 }
+
+// outputKey shortens a step key to the [Output.Key] callers see: 64 bits
+// of the chained hash tell apart the few steps a page holds at once.
+func outputKey(stepKey string) string { return stepKey[:16] }
 
 func fingerprint(data Data, name string) string {
 	if ds, ok := data.Sets[name]; ok && ds != nil {
