@@ -95,7 +95,7 @@ func (pr *esProblem) solveStates(sol esSolution, states []int) (esSolution, esSt
 	}
 	w := newFullWork(f)
 	g := make([]float64, f.nVars())
-	best, bestStates := sol, init
+	best, bestStates := sol, esStates{level: init.level, trend: init.trend, season: clone(init.season)}
 	scale := sol.sse
 	fg := func(u, grad []float64) float64 {
 		p, st := unpack(u)
@@ -103,7 +103,8 @@ func (pr *esProblem) solveStates(sol esSolution, states []int) (esSolution, esSt
 		best.evals++
 		if sse < best.sse {
 			best.p, best.sse = p, sse
-			bestStates = esStates{level: st.level, trend: st.trend, season: clone(st.season)}
+			bestStates.level, bestStates.trend = st.level, st.trend
+			copy(bestStates.season, st.season)
 		}
 		for i, k := range vars {
 			gk := g[k]
