@@ -1,5 +1,7 @@
 package forecast
 
+import "math"
+
 // This file holds the SSE of the exponential smoothing recursion, alone
 // (the grid search) or together with its exact gradient with respect to
 // alpha, beta, gamma and phi, the initial states held fixed. The gradient
@@ -26,15 +28,18 @@ func newESWork(m int) *esWork {
 // is not nil. The initial states are held fixed (their derivatives are 0).
 func (f esForm) sseGrad(y []float64, p [nConst]float64, init esStates, w *esWork, grad *[nConst]float64) float64 {
 	if grad == nil {
-		return f.sse(y, p, init, w)
+		return f.sse(y, p, init, w, math.Inf(1))
 	}
 	sse := f.sseGradFull(y, p, init, &w.full, w.g)
 	copy(grad[:], w.g[:nConst])
 	return sse
 }
 
-// sse returns the SSE alone, without derivatives (the grid search).
-func (f esForm) sse(y []float64, p [nConst]float64, init esStates, w *esWork) float64 {
+// sse returns the SSE alone, without derivatives (the grid search). It
+// stops as soon as the running sum exceeds limit and returns that partial
+// sum, itself above limit: a grid point that cannot be among the best needs
+// no more of the series. Pass +Inf for the whole SSE.
+func (f esForm) sse(y []float64, p [nConst]float64, init esStates, w *esWork, limit float64) float64 {
 	alpha, beta, gamma, phi := p[iAlpha], p[iBeta], p[iGamma], p[iPhi]
 	l, b := init.level, init.trend
 	if !f.trend {
@@ -66,6 +71,9 @@ func (f esForm) sse(y []float64, p [nConst]float64, init esStates, w *esWork) fl
 		l = lNew
 		e := v - pred
 		sse += e * e
+		if sse > limit {
+			return sse
+		}
 		if j++; j == f.m {
 			j = 0
 		}

@@ -116,3 +116,34 @@ func TestSSEGradientFull(t *testing.T) {
 }
 
 func abs(x float64) float64 { return math.Abs(x) }
+
+// TestSSELimit checks that the grid's early stop returns the whole SSE
+// under a limit above it and a partial sum above the limit otherwise.
+func TestSSELimit(t *testing.T) {
+	y := seededSeasonal(rand.New(rand.NewPCG(8, 9)), 48, 12)
+	f := esForm{trend: true, season: Additive, m: 12}
+	init, _ := f.heuristicStates(y)
+	p := [nConst]float64{0.3, 0.1, 0.2, 1}
+	w := newESWork(12)
+	full := f.sse(y, p, init, w, math.Inf(1))
+	for _, tc := range []struct {
+		name    string
+		limit   float64
+		wantAll bool
+	}{
+		{"limit above", full * 2, true},
+		{"limit equal", full, true},
+		{"limit a tenth", full / 10, false},
+		{"limit zero", 0, false},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			got := f.sse(y, p, init, w, tc.limit)
+			if tc.wantAll && !within(got, full, 0, 1e-12) {
+				t.Errorf("sse with limit %g = %g; want the whole SSE %g", tc.limit, got, full)
+			}
+			if !tc.wantAll && !(got > tc.limit && got < full) {
+				t.Errorf("sse with limit %g = %g; want a partial sum above the limit and below %g", tc.limit, got, full)
+			}
+		})
+	}
+}

@@ -82,7 +82,8 @@ func (pr *esProblem) gridStarts(w *esWork, sol *esSolution) [][nConst]float64 {
 	var walk func(i int, p [nConst]float64)
 	walk = func(i int, p [nConst]float64) {
 		if i == len(pr.free) {
-			sse := pr.form.sseGrad(pr.y, p, pr.init, w, nil)
+			// Only the best two points matter: stop summing past the second.
+			sse := pr.form.sse(pr.y, p, pr.init, w, best[1].sse)
 			sol.evals++
 			switch {
 			case sse < best[0].sse:
