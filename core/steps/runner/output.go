@@ -39,13 +39,12 @@ type Output struct {
 	Error   *steps.Error `json:"error,omitempty"`
 	WaitsOn int          `json:"waitsOn,omitempty"` // the failed step this one waits on
 	Blocks  []Block      `json:"blocks"`
-	// Key names what the step computed: it is derived from this step and
-	// every step before it (and the files they load), so two outputs with
-	// the same Key have the same Status, Error, WaitsOn and Blocks; only
-	// Line and Text may differ, after an edit that moves the step. A
-	// re-run that reuses a step's result gives it the same Key, which lets
-	// a caller keep what it drew from the earlier output. Key is empty for
-	// a step cut short by cancellation, whose output is never reused.
+	// Key is a digest of what the output shows: two outputs with the same
+	// Key have the same Step, Verb, Status, Error (but for its line),
+	// WaitsOn and Blocks; Line and Text may differ, after an edit that moves
+	// or rewords the step without changing its result. A step reused or
+	// recomputed to the same result keeps its Key, which lets a caller keep
+	// what it drew from the earlier output. It is 32 hexadecimal digits.
 	Key string `json:"key,omitempty"`
 }
 

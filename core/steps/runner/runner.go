@@ -6,6 +6,7 @@ import (
 	"encoding/hex"
 	"errors"
 	"fmt"
+	"strconv"
 
 	"quillcast/core/series"
 	"quillcast/core/session"
@@ -35,6 +36,11 @@ type Runner struct {
 type cached struct {
 	after *state
 	out   Output
+	// next is the key the steps after this one chain from: the step's
+	// own key, or, when the step only showed something (see
+	// [state.shows]), a key saying only how many exhibits it numbered, so
+	// that editing such a step does not run the steps after it again.
+	next string
 }
 
 // New returns a Runner using the forecasting package's catalogue.
@@ -61,25 +67,29 @@ func (r *Runner) RunWith(ctx context.Context, doc *session.Document, data Data, 
 	defer rep.end()
 	for i, s := range prog.Steps {
 		rep.step(i, s.N, s.Verb)
-		key = stepKey(key, s, data)
-		if c, ok := r.cache[key]; ok {
+		k := stepKey(key, s, data)
+		if c, ok := r.cache[k]; ok {
 			out := relocate(c.out, s)
 			res.add(out)
 			res.Reused++
-			next[key] = c
-			st = c.after
+			next[k] = c
+			st, key = c.after, c.next
 			continue
 		}
 		after, out := r.runStep(ctx, st, s, data, rep, i)
+		out.Key = contentKey(out)
 		res.Computed++
+		c := cached{after: after, out: out, next: k}
+		if st.shows(after) {
+			c.next = shownKey(key, after.exhibits)
+		}
 		if ctx.Err() == nil {
 			// A step cut short by cancellation is not kept: the next
 			// run does it properly.
-			out.Key = outputKey(key)
-			next[key] = cached{after: after, out: out}
+			next[k] = c
 		}
 		res.add(out)
-		st = after
+		st, key = after, c.next
 	}
 	r.cache = next
 	res.final = st
@@ -112,9 +122,15 @@ func stepKey(prev string, s *steps.Step, data Data) string {
 	return hex.EncodeToString(h.Sum(nil))
 }
 
-// outputKey shortens a step key to the [Output.Key] callers see: 64 bits
-// of the chained hash tell apart the few steps a page holds at once.
-func outputKey(stepKey string) string { return stepKey[:16] }
+// shownKey is the key after a step that only showed something: the key
+// before it and the number of exhibits numbered so far.
+func shownKey(prev string, exhibits int) string {
+	h := sha256.New()
+	h.Write([]byte(prev))
+	h.Write([]byte{1})
+	h.Write([]byte(strconv.Itoa(exhibits)))
+	return hex.EncodeToString(h.Sum(nil))
+}
 
 func fingerprint(data Data, name string) string {
 	if ds, ok := data.Sets[name]; ok && ds != nil {

@@ -125,3 +125,15 @@ func (s *state) forecastNamed(label string) *fcast {
 	}
 	return nil
 }
+
+// shows reports whether after differs from s only in the exhibits it
+// numbered: the step between them only showed something (a smoothed
+// line, a chart of the series) and left every result a later step reads
+// as it was. Steps replace what they change rather than writing into
+// values they share with s (see [state]), so comparing pointers suffices.
+func (s *state) shows(after *state) bool {
+	return s.meta == after.meta && s.data == after.data && s.split == after.split &&
+		s.eval == after.eval && s.pick == after.pick &&
+		slices.Equal(s.forecasts, after.forecasts) && slices.Equal(s.cautions, after.cautions) &&
+		maps.Equal(s.backtests, after.backtests) && maps.Equal(s.broken, after.broken)
+}
