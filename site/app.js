@@ -327,7 +327,7 @@ function toggleHelp() {
 async function main() {
   wire();
   try {
-    const [, demo] = await Promise.all([start(engineResponse()), loadDemo()]);
+    await start(engineResponse());
     root.dataset.engine = mode();
     const store = await call("storage");
     $("storage-note").textContent = store.kind === "IndexedDB"
@@ -347,6 +347,9 @@ async function main() {
     } else if (known.length > 0) {
       await openSession(known[0].id);
     } else {
+      // The demo's files are read only when the demo opens, after the
+      // engine is ready: a repeat visit never needs them.
+      const demo = await loadDemo();
       for (const f of demo.files) await call("attach", f.bytes, f.name);
       await listDatasets();
       await newSession("Demo: Wickery candle orders", demo.text || "```quill\n```\n");

@@ -25,7 +25,7 @@ const busyAfterMs = 250;
 const engine = {
   mode: "",        // "worker" or "page"
   worker: null,
-  wasm: null,      // the engine's bytes, kept to restart a stopped worker
+  module: null,    // the compiled engine, kept to restart a stopped worker
   pending: new Map(), // call id -> {resolve, reject, name}
   nextId: 1,
   busyTimer: 0,
@@ -51,11 +51,11 @@ function waitReady() {
   });
 }
 
-/** startInPage runs the engine on the page's own thread. */
-async function startInPage(wasm) {
+/** startInPage runs the compiled engine on the page's own thread. */
+async function startInPage(module) {
   const ready = waitReady();
   const go = new globalThis.Go();
-  const { instance } = await WebAssembly.instantiate(wasm, go.importObject);
+  const instance = await WebAssembly.instantiate(module, go.importObject);
   go.run(instance).then(() => document.dispatchEvent(new CustomEvent("quillcast-stopped")));
   await ready;
   engine.mode = "page";
@@ -68,10 +68,10 @@ async function startInPage(wasm) {
  */
 async function workerSource() {
   if (!engine.source) {
-    const runtime = isBundle()
-      ? document.querySelector("script:not([src]):not([type])").textContent
-      : await assetText("wasm_exec.js");
-    const code = await assetText("worker.js");
+    const [runtime, code] = await Promise.all([
+      isBundle() ? document.querySelector("script:not([src]):not([type])").textContent : assetText("wasm_exec.js"),
+      assetText("worker.js"),
+    ]);
     if (!runtime || !code) throw new Error("the worker's code is missing");
     engine.source = new Blob([runtime, "\n", code], { type: "text/javascript" });
   }
@@ -88,8 +88,13 @@ async function makeWorker() {
   }
 }
 
-/** startWorker starts the engine in a worker and installs the proxy. */
-async function startWorker(wasm) {
+/**
+ * startWorker starts the engine in a worker and installs the proxy. module
+ * is the compiled engine or a Promise of it: the worker is made (and reads
+ * its code) while the engine still compiles, and is sent the module, which
+ * the browser shares with it rather than copying or compiling it again.
+ */
+async function startWorker(module) {
   const w = await makeWorker();
   const info = await new Promise((resolve, reject) => {
     w.onerror = (e) => reject(new Error(e.message || "the worker could not start"));
@@ -98,7 +103,7 @@ async function startWorker(wasm) {
       if (m.type === "ready") resolve(m);
       else if (m.type === "failed") reject(new Error(m.message));
     };
-    w.postMessage({ type: "start", wasm }, [wasm]);
+    Promise.resolve(module).then((m) => w.postMessage({ type: "start", module: m })).catch(reject);
   });
   w.onerror = null;
   w.onmessage = (e) => received(e.data);
@@ -151,17 +156,36 @@ function busyCheck() {
 }
 
 /**
- * start loads the engine (a Response or a Promise of one) and resolves
- * once it is ready: in a worker where possible, on the page otherwise.
+ * compile compiles the engine from a Response (or a Promise of one) once.
+ * A response served as application/wasm compiles while it streams in, which
+ * also lets the browser reuse the code it compiled on an earlier visit to
+ * the same (content-hashed) address; any other is read whole first.
+ */
+async function compile(response) {
+  const res = await response;
+  if (!res.ok) throw new Error(`the engine could not be loaded (${res.status} ${res.statusText})`);
+  const type = res.headers.get("Content-Type") || "";
+  if (WebAssembly.compileStreaming && type.split(";")[0].trim() === "application/wasm") {
+    return WebAssembly.compileStreaming(res);
+  }
+  return WebAssembly.compile(await res.arrayBuffer());
+}
+
+/**
+ * start compiles the engine (from a Response or a Promise of one) and
+ * resolves once it is ready: in a worker where possible, on the page
+ * otherwise.
  */
 export async function start(response) {
-  const [bytes] = await Promise.all([(await response).arrayBuffer(), workerSource().catch(() => null)]);
-  engine.wasm = bytes.slice(0);
+  const module = compile(response);
+  engine.module = module;
   try {
-    await startWorker(bytes.slice(0));
+    await startWorker(module);
   } catch (err) {
+    // A failed compile is not the worker's fault: say what went wrong.
+    await module;
     console.warn(`quillcast: the engine runs on the page itself, because no worker could start (${err.message})`);
-    await startInPage(bytes);
+    await startInPage(await module);
   }
   if (globalThis.quillcast.version !== engineVersion) {
     throw new Error(`this page needs engine version ${engineVersion}, but version ${globalThis.quillcast.version} was loaded; reload the page`);
@@ -183,7 +207,7 @@ export async function stop() {
   engine.pending.clear();
   busyCheck();
   // The fresh engine reloads the stored datasets before any other call.
-  engine.restarting = startWorker(engine.wasm.slice(0)).then(() => post("storage", []));
+  engine.restarting = startWorker(engine.module).then(() => post("storage", []));
   try {
     await engine.restarting;
   } finally {

@@ -2,7 +2,7 @@
 // thread so that long runs (sweeps, backtests, bake-offs) leave the page
 // responsive, and so that a run can be stopped by ending the worker.
 //
-// Messages in:  {type: "start", wasm: ArrayBuffer}
+// Messages in:  {type: "start", module: WebAssembly.Module}
 //               {type: "call", id, name, args}
 // Messages out: {type: "ready", version, names}, {type: "reply", id, text},
 //               {type: "failed", message}, {type: "stopped"},
@@ -17,10 +17,12 @@ if (typeof Go === "undefined") {
   importScripts("wasm_exec.js");
 }
 
-async function startEngine(wasm) {
+async function startEngine(module) {
   const ready = new Promise((resolve) => self.addEventListener("quillcast-ready", resolve, { once: true }));
   const go = new Go();
-  const { instance } = await WebAssembly.instantiate(wasm, go.importObject);
+  // The page compiled the engine once and sent the module: instantiating
+  // it here does not compile it a second time.
+  const instance = await WebAssembly.instantiate(module, go.importObject);
   go.run(instance).then(() => self.postMessage({ type: "stopped" }));
   await ready;
   const api = self.quillcast;
@@ -45,7 +47,7 @@ self.addEventListener("quillcast-progress", (e) => self.postMessage({ type: "pro
 self.onmessage = (e) => {
   const m = e.data;
   if (m.type === "start") {
-    startEngine(m.wasm).catch((err) => self.postMessage({ type: "failed", message: String(err && err.message ? err.message : err) }));
+    startEngine(m.module).catch((err) => self.postMessage({ type: "failed", message: String(err && err.message ? err.message : err) }));
   } else if (m.type === "call") {
     answer(m);
   }

@@ -99,6 +99,8 @@ func buildBundle(files siteFiles) (string, error) {
 	page = strings.Replace(page, styleRef, "<style>"+style+"</style>", 1)
 	page = strings.Replace(page, runtimRef, "<script>"+runtime+"</script>", 1)
 	page = strings.Replace(page, appRef, `<script type="module">`+app+"</script>", 1)
+	page = strings.Replace(page, engineRef+"\n", "", 1) // the engine is inside the page: nothing to fetch
+	page = strings.Replace(page, engineRef, "", 1)
 	meta := `<meta http-equiv="Content-Security-Policy" content="` + html.EscapeString(bundlePolicy([]string{runtime, app}, []string{style})) + `">`
 	page = strings.Replace(page, `<meta charset="utf-8">`, `<meta charset="utf-8">`+"\n"+meta, 1)
 	page = strings.Replace(page, "</body>", `<script type="application/json" id="quillcast-files">`+data+"</script>\n</body>", 1)

@@ -36,16 +36,29 @@ func distIndex(index []byte, folder string) string {
 	page := string(index)
 	page = strings.Replace(page, styleRef, `<link rel="stylesheet" href="`+folder+`/style.css">`, 1)
 	page = strings.Replace(page, runtimRef, `<script src="`+folder+`/wasm_exec.js"></script>`, 1)
-	page = strings.Replace(page, appRef, `<script type="module" src="`+folder+`/app.js"></script>`, 1)
+	page = strings.Replace(page, appRef, `<script type="module" src="`+folder+`/`+joinedModules+`"></script>`, 1)
+	page = strings.Replace(page, engineRef, strings.Replace(engineRef, `href="`, `href="`+folder+`/`, 1), 1)
 	meta := `<meta http-equiv="Content-Security-Policy" content="` + html.EscapeString(static.MetaPolicy()) + `">`
 	return strings.Replace(page, `<meta charset="utf-8">`, `<meta charset="utf-8">`+"\n"+meta, 1)
 }
+
+// joinedModules is the file of the dist folder holding the page's modules
+// joined into one (see [joinModules]): the browser fetches one script
+// instead of learning of the modules app.js imports only after fetching
+// it, which delays starting the engine by a round trip.
+const joinedModules = "quillcast.js"
 
 // writeDist writes the folder for a static host into out, replacing it.
 func writeDist(files siteFiles, out string) error {
 	if err := os.RemoveAll(out); err != nil {
 		return err
 	}
+	joined, err := joinModules(files, "app.js")
+	if err != nil {
+		return err
+	}
+	files = maps.Clone(files)
+	files[joinedModules] = []byte(joined)
 	folder := assetFolder(files)
 	for name, body := range files {
 		target := path.Join(folder, name)

@@ -9,7 +9,7 @@ import (
 
 func testSite() siteFiles {
 	return siteFiles{
-		"index.html":      []byte("<!doctype html>\n<head>\n<meta charset=\"utf-8\">\n" + styleRef + "\n" + runtimRef + "\n" + appRef + "\n</head>\n<body>\n<main></main>\n</body>\n"),
+		"index.html":      []byte("<!doctype html>\n<head>\n<meta charset=\"utf-8\">\n" + styleRef + "\n" + runtimRef + "\n" + appRef + "\n" + engineRef + "\n</head>\n<body>\n<main></main>\n</body>\n"),
 		"style.css":       []byte("body { color: black; }\n"),
 		"wasm_exec.js":    []byte("globalThis.Go = class {};\n"),
 		"quillcast.wasm":  []byte("\x00asm\x01\x00\x00\x00"),
@@ -77,7 +77,16 @@ func TestDist(t *testing.T) {
 	if err := writeDist(files, out); err != nil {
 		t.Fatal(err)
 	}
-	folder := assetFolder(files)
+	entries, err := os.ReadDir(out)
+	if err != nil {
+		t.Fatal(err)
+	}
+	folder := ""
+	for _, e := range entries {
+		if e.IsDir() {
+			folder = e.Name()
+		}
+	}
 	if !strings.HasPrefix(folder, "assets-") || len(folder) != len("assets-")+12 {
 		t.Fatalf("asset folder %q, want assets- and 12 hex digits", folder)
 	}
@@ -85,10 +94,14 @@ func TestDist(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	for _, want := range []string{`href="` + folder + `/style.css"`, `src="` + folder + `/app.js"`, `http-equiv="Content-Security-Policy"`, "connect-src &#39;self&#39;"} {
+	for _, want := range []string{`href="` + folder + `/style.css"`, `src="` + folder + `/quillcast.js"`, `rel="preload" href="` + folder + `/quillcast.wasm"`, `http-equiv="Content-Security-Policy"`, "connect-src &#39;self&#39;"} {
 		if !strings.Contains(string(index), want) {
 			t.Errorf("dist index.html lacks %s:\n%s", want, index)
 		}
+	}
+	joined, err := os.ReadFile(filepath.Join(out, folder, "quillcast.js"))
+	if err != nil || strings.Contains(string(joined), "import {") || !strings.Contains(string(joined), "// --- app.js") {
+		t.Errorf("the joined modules are missing or still import (%v):\n%s", err, joined)
 	}
 	if _, err := os.Stat(filepath.Join(out, folder, "demo", "orders.csv")); err != nil {
 		t.Errorf("the demo file is not in the asset folder: %v", err)
@@ -109,7 +122,7 @@ func TestBundle(t *testing.T) {
 			t.Errorf("bundle lacks %s", want)
 		}
 	}
-	for _, bad := range []string{`src="app.js"`, `href="style.css"`, "connect-src &#39;self&#39;"} {
+	for _, bad := range []string{`src="app.js"`, `href="style.css"`, "connect-src &#39;self&#39;", `rel="preload"`} {
 		if strings.Contains(page, bad) {
 			t.Errorf("bundle still has %s", bad)
 		}

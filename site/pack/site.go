@@ -11,11 +11,15 @@ import (
 // siteFiles is a built site: file contents by slash-separated path.
 type siteFiles map[string][]byte
 
-// The three references in index.html that both outputs rewrite.
+// The references in index.html that both outputs rewrite. engineRef asks
+// the browser to fetch the engine while the page's modules still load; the
+// page then compiles that same response (engine.js), so its address must
+// stay the one the modules ask for.
 const (
 	styleRef  = `<link rel="stylesheet" href="style.css">`
 	runtimRef = `<script src="wasm_exec.js"></script>`
 	appRef    = `<script type="module" src="app.js"></script>`
+	engineRef = `<link rel="preload" href="quillcast.wasm" as="fetch" type="application/wasm" crossorigin>`
 )
 
 // readSite reads every file under dir and checks the page's references.
@@ -46,7 +50,7 @@ func (f siteFiles) check() error {
 	if !ok {
 		return fmt.Errorf("the built site has no index.html; run `make build` first")
 	}
-	for _, ref := range []string{styleRef, runtimRef, appRef} {
+	for _, ref := range []string{styleRef, runtimRef, appRef, engineRef} {
 		if !strings.Contains(string(index), ref) {
 			return fmt.Errorf("index.html no longer contains %s; update site/pack to match", ref)
 		}
