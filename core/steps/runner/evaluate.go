@@ -213,7 +213,15 @@ func validCell(rows []scored, by string, v float64) string {
 
 func evalNote(x *exec, rows []scored, by accuracy.Measure, best string) string {
 	if best == "" {
-		return fmt.Sprintf("No forecast has a defined %s on the validation period.", measureHeader(by))
+		note := fmt.Sprintf("No forecast has a defined %s on the validation period.", measureHeader(by))
+		seen := map[string]bool{}
+		for _, r := range rows {
+			if reason := r.reasons[by.String()]; reason != "" && !seen[reason] {
+				seen[reason] = true
+				note += " " + reason + "."
+			}
+		}
+		return note
 	}
 	var bestV float64
 	var bench []string
