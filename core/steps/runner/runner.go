@@ -43,8 +43,12 @@ type cached struct {
 	next string
 }
 
-// New returns a Runner using the forecasting package's catalogue.
-func New() *Runner { return &Runner{cat: steps.DefaultCatalog(), cache: map[string]cached{}} }
+// New returns a Runner using the forecasting package's catalogue. Only
+// in a build with the faulthook tag does it install a test fault (see
+// faulthook_on.go).
+func New() *Runner {
+	return &Runner{cat: steps.DefaultCatalog(), cache: map[string]cached{}, fault: faultHook()}
+}
 
 // Run parses and runs the session document doc on the attached data. ctx
 // cancels a long run; the steps not yet run then fail with a message
