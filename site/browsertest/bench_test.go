@@ -235,7 +235,7 @@ func rerunLatency(p *page, from, to string, reps int) benchSample {
 		answer = eval[int](p, `(globalThis.__qcRun || {bytes: 0}).bytes`)
 		time.Sleep(600 * time.Millisecond) // let the autosave finish
 	}
-	s.Note = fmt.Sprintf("editing %q to %q and back, Enter to the status line saying all steps ran; of which the engine's run call (worker round trip with an answer of %d characters of JSON) took %s s (median), the rest is the page drawing every output again",
+	s.Note = fmt.Sprintf("editing %q to %q and back, Enter to the status line saying all steps ran; of which the engine's run call (worker round trip with an answer of %d characters of JSON) took %s s (median), the rest is the page swapping in the outputs that changed",
 		from, to, answer, median(calls))
 	return s
 }
