@@ -26,7 +26,7 @@ OUT       ?= $(BUILD)/memo
 WASM_ENV  := GOOS=js GOARCH=wasm
 WASM_OPTS := -trimpath -ldflags='-s -w'
 
-.PHONY: all serve build test vet test-host test-wasm dist bundle sizes bakeoff memo fuzz bench clean
+.PHONY: all serve build test vet test-host test-wasm dist bundle sizes bakeoff memo fuzz bench bench-deps clean
 
 all: build
 
@@ -108,7 +108,7 @@ bench-deps:
 	/usr/bin/python3 -c 'import statsmodels' 2>/dev/null || missing="$$missing python3-statsmodels"; \
 	command -v brotli >/dev/null || missing="$$missing brotli"; \
 	test -x /usr/bin/chromium || missing="$$missing chromium"; \
-	if [ -n "$$missing" ]; then apt-get install -y $$missing; fi
+	if [ -n "$$missing" ]; then apt-get update && apt-get install -y $$missing; fi
 
 clean:
 	rm -rf $(BUILD)
