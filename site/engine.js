@@ -89,23 +89,35 @@ async function makeWorker() {
 }
 
 /**
- * startWorker starts the engine in a worker and installs the proxy. module
- * is the compiled engine or a Promise of it: the worker is made (and reads
- * its code) while the engine still compiles, and is sent the module, which
- * the browser shares with it rather than copying or compiling it again.
+ * launch starts the engine in a new worker and resolves with the worker and
+ * its ready message. module is the compiled engine or a Promise of it: the
+ * worker is made (and reads its code) while the engine still compiles, and
+ * is sent the module, which the browser shares with it rather than copying
+ * or compiling it again. offer goes with the start message.
  */
-async function startWorker(module) {
+async function launch(module, offer) {
   const w = await makeWorker();
-  const info = await new Promise((resolve, reject) => {
-    w.onerror = (e) => reject(new Error(e.message || "the worker could not start"));
-    w.onmessage = (e) => {
-      const m = e.data;
-      if (m.type === "ready") resolve(m);
-      else if (m.type === "failed") reject(new Error(m.message));
-    };
-    Promise.resolve(module).then((m) => w.postMessage({ type: "start", module: m })).catch(reject);
-  });
-  w.onerror = null;
+  try {
+    const info = await new Promise((resolve, reject) => {
+      w.onerror = (e) => reject(new Error(e.message || "the worker could not start"));
+      w.onmessage = (e) => {
+        const m = e.data;
+        if (m.type === "ready") resolve(m);
+        else if (m.type === "failed") reject(new Error(m.message));
+      };
+      Promise.resolve(module).then((m) => w.postMessage({ type: "start", module: m, ...offer })).catch(reject);
+    });
+    w.onerror = null;
+    return { w, info };
+  } catch (err) {
+    w.terminate();
+    throw err;
+  }
+}
+
+/** startWorker starts the engine in a worker and installs the proxy. */
+async function startWorker(module) {
+  const { w, info } = await launch(module, poolOffer());
   w.onmessage = (e) => received(e.data);
   engine.worker = w;
   engine.mode = "worker";
@@ -121,6 +133,9 @@ function received(m) {
     engine.pending.delete(m.id);
     p.resolve(m.text);
     busyCheck();
+  } else if (m.type === "part") {
+    pool.queue.push({ id: m.id, text: m.text });
+    pump();
   } else if (m.type === "progress") {
     globalThis.dispatchEvent(new CustomEvent("quillcast-progress", { detail: m.detail }));
   } else if (m.type === "storage-closed") {
@@ -143,6 +158,106 @@ function post(name, args) {
     engine.worker.postMessage({ type: "call", id, name, args });
     busyCheck();
   });
+}
+
+/*
+ * Further workers for a bake-off. The engine worker hands the page each
+ * part of a bake-off as text; the page gives it to an idle further worker
+ * (started on first need, up to the number offered) and hands the answer
+ * back as it came. The engine splits the work and merges the answers, so
+ * the page only moves text. A part no further worker can take fails, and
+ * the engine forecasts it itself.
+ */
+
+/** The most further workers a bake-off uses. */
+const maxPoolWorkers = 4;
+
+const pool = {
+  size: 0,     // how many may run
+  list: [],    // {worker, ready, part}: part is the one it works on
+  queue: [],   // parts waiting: {id, text}
+  failure: "", // why a further worker could not start
+};
+
+/** poolOffer is what the engine worker is told about further workers. */
+function poolOffer() {
+  const cores = navigator.hardwareConcurrency || 1;
+  pool.size = cores < 2 ? 0 : Math.min(cores, maxPoolWorkers);
+  return { poolSize: pool.size, why: pool.size ? "" : "the browser reports a single processor core" };
+}
+
+/** pump gives waiting parts to idle further workers, starting more if allowed. */
+function pump() {
+  while (pool.queue.length > 0) {
+    const idle = pool.list.find((h) => h.ready && !h.part);
+    if (idle) {
+      idle.part = pool.queue.shift();
+      idle.worker.postMessage({ type: "call", id: idle.part.id, name: "bakeoffPart", args: [idle.part.text] });
+    } else if (pool.failure && pool.list.length === 0) {
+      for (const part of pool.queue.splice(0)) {
+        engine.worker.postMessage({ type: "part-failed", id: part.id, message: pool.failure });
+      }
+    } else if (!pool.failure && pool.list.length < pool.size &&
+               pool.list.filter((h) => !h.ready).length < pool.queue.length) {
+      startPoolWorker();
+    } else {
+      return;
+    }
+  }
+}
+
+/** startPoolWorker starts one further worker. */
+function startPoolWorker() {
+  const h = { worker: null, ready: false, part: null };
+  pool.list.push(h);
+  launch(engine.module, {}).then(({ w }) => {
+    if (!pool.list.includes(h)) {
+      w.terminate(); // stopped while it started
+      return;
+    }
+    h.worker = w;
+    h.ready = true;
+    w.onmessage = (e) => poolWorkerSaid(h, e.data);
+    w.onerror = (e) => {
+      if (!pool.list.includes(h)) return;
+      w.terminate();
+      dropPoolWorker(h, `a further worker failed (${e.message || "no reason given"})`);
+    };
+    pump();
+  }, (err) => {
+    dropPoolWorker(h, `a further worker could not start (${err.message})`);
+  });
+}
+
+/** poolWorkerSaid hands a further worker's answer back to the engine worker. */
+function poolWorkerSaid(h, m) {
+  if (!pool.list.includes(h)) return;
+  if (m.type === "reply" && h.part && m.id === h.part.id) {
+    engine.worker.postMessage({ type: "part-reply", id: h.part.id, text: m.text });
+    h.part = null;
+    pump();
+  } else if (m.type === "stopped") {
+    h.worker.terminate();
+    dropPoolWorker(h, "a further worker stopped");
+  }
+}
+
+/** dropPoolWorker forgets a further worker that failed, failing its part. */
+function dropPoolWorker(h, why) {
+  pool.list = pool.list.filter((x) => x !== h);
+  pool.failure = why;
+  if (h.part) engine.worker.postMessage({ type: "part-failed", id: h.part.id, message: why });
+  pump();
+}
+
+/** stopPool ends every further worker and forgets the waiting parts. */
+function stopPool() {
+  for (const h of pool.list) {
+    if (h.worker) h.worker.terminate();
+  }
+  pool.list = [];
+  pool.queue = [];
+  pool.failure = "";
 }
 
 /** busyCheck shows the progress bar while a call has run for a while. */
@@ -185,6 +300,7 @@ export async function start(response) {
     // A failed compile is not the worker's fault: say what went wrong.
     await module;
     console.warn(`quillcast: the engine runs on the page itself, because no worker could start (${err.message})`);
+    globalThis.quillcastPool = { size: 0, why: `no worker could start (${err.message})` };
     await startInPage(await module);
   }
   if (globalThis.quillcast.version !== engineVersion) {
@@ -201,6 +317,7 @@ export async function start(response) {
 export async function stop() {
   if (engine.mode !== "worker") return false;
   engine.worker.terminate();
+  stopPool();
   for (const p of engine.pending.values()) {
     p.reject(new EngineError({ message: "the run was stopped", code: "stopped" }));
   }

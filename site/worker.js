@@ -2,11 +2,19 @@
 // thread so that long runs (sweeps, backtests, bake-offs) leave the page
 // responsive, and so that a run can be stopped by ending the worker.
 //
-// Messages in:  {type: "start", module: WebAssembly.Module}
+// Messages in:  {type: "start", module: WebAssembly.Module, poolSize?, why?}
 //               {type: "call", id, name, args}
+//               {type: "part-reply", id, text}, {type: "part-failed", id, message}
 // Messages out: {type: "ready", version, names}, {type: "reply", id, text},
 //               {type: "failed", message}, {type: "stopped"},
-//               {type: "storage-closed"}, {type: "progress", detail}
+//               {type: "storage-closed"}, {type: "progress", detail},
+//               {type: "part", id, text}
+//
+// The engine worker is told how many further workers the page may start
+// for a bake-off (poolSize, and why when none); the engine hands each part
+// of a bake-off to the page as a "part" message, and the page answers it
+// with the text a further worker's bakeoffPart returned. Further workers
+// run this same code, started without a pool size.
 //
 // The page starts it from a Blob holding wasm_exec.js followed by this
 // text, so Go is already defined and no file is fetched; loaded on its own,
@@ -30,6 +38,33 @@ async function startEngine(module) {
   self.postMessage({ type: "ready", version: api.version, names });
 }
 
+// The parts of a bake-off waiting for the page's answer, by id.
+const parts = { next: 1, waiting: new Map() };
+
+/** offerPool lets the engine find the page's further workers (see wasm/pool.go). */
+function offerPool(size, why) {
+  self.quillcastPool = {
+    size,
+    why,
+    run(text) {
+      const id = parts.next++;
+      return new Promise((resolve, reject) => {
+        parts.waiting.set(id, { resolve, reject });
+        self.postMessage({ type: "part", id, text });
+      });
+    },
+  };
+}
+
+/** partAnswered settles the part the page answered. */
+function partAnswered(m) {
+  const p = parts.waiting.get(m.id);
+  if (!p) return;
+  parts.waiting.delete(m.id);
+  if (m.type === "part-reply") p.resolve(m.text);
+  else p.reject(new Error(m.message));
+}
+
 async function answer(m) {
   let text;
   try {
@@ -47,8 +82,11 @@ self.addEventListener("quillcast-progress", (e) => self.postMessage({ type: "pro
 self.onmessage = (e) => {
   const m = e.data;
   if (m.type === "start") {
+    if (typeof m.poolSize === "number") offerPool(m.poolSize, m.why || "");
     startEngine(m.module).catch((err) => self.postMessage({ type: "failed", message: String(err && err.message ? err.message : err) }));
   } else if (m.type === "call") {
     answer(m);
+  } else if (m.type === "part-reply" || m.type === "part-failed") {
+    partAnswered(m);
   }
 };

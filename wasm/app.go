@@ -50,6 +50,7 @@ func (a *app) functions() map[string]js.Func {
 		"complete":         syncFunc("complete", a.complete),
 		"parts":            syncFunc("parts", a.parts),
 		"run":              asyncFunc("run", a.runSession),
+		"bakeoffPart":      asyncFunc("bakeoffPart", a.bakeoffPart),
 		"storage":          asyncFunc("storage", a.storage),
 		"datasets":         asyncFunc("datasets", a.listDatasets),
 		"removeDataset":    asyncFunc("removeDataset", a.removeDataset),

@@ -7,6 +7,7 @@ import (
 	"maps"
 	"syscall/js"
 
+	"quillcast/core/bakeoff"
 	"quillcast/core/steps"
 	"quillcast/core/steps/runner"
 )
@@ -42,7 +43,8 @@ type pageOutput struct {
 // with one of those keys come back without their blocks (see
 // [pageOutput]). Steps unchanged since the last run reuse their results, so
 // an edit re-runs only from the edited step on. Progress is dispatched as
-// it goes (see [reportProgress]).
+// it goes (see [reportProgress]); a bake-off step shares its series among
+// the page's further workers where the page offers them (see [pagePool]).
 func (a *app) runSession(args []js.Value) (any, error) {
 	partsJSON, err := stringArg(args, 0, "the session")
 	if err != nil {
@@ -62,7 +64,11 @@ func (a *app) runSession(args []js.Value) (any, error) {
 	files := maps.Clone(a.files)
 	r := a.run
 	a.mu.Unlock()
-	res := r.RunWith(context.Background(), doc, runner.Data{Files: files}, runner.Options{Progress: reportProgress})
+	ctx := context.Background()
+	if p := pagePoolOf(); p != nil {
+		ctx = bakeoff.WithPool(ctx, p)
+	}
+	res := r.RunWith(ctx, doc, runner.Data{Files: files}, runner.Options{Progress: reportProgress})
 	a.mu.Lock()
 	a.last = res
 	a.mu.Unlock()

@@ -14,6 +14,11 @@
 // through [Options.Progress], so that a page can run it off the main
 // thread with a progress bar and a cancel button.
 //
+// A host whose engine runs on one thread (a page's Web Worker) passes a
+// [Pool] in [Options.Pool]: Run then sends parts of the series as text to
+// other engines, which answer with [RunPart], and merges the answers in
+// series order, so the result is the same as a run without a pool.
+//
 // # Scores
 //
 // sMAPE is 200|a-f|/(|a|+|f|) percent and MASE is |a-f| over the mean

@@ -32,9 +32,12 @@ type Options struct {
 	// core.
 	Workers int
 	// Progress, when set, is called after each series with the number of
-	// series done and the total. Calls come one at a time, in no fixed
-	// order of series.
+	// series done and the total (after each part, with a pool). Calls come
+	// one at a time, in no fixed order of series.
 	Progress func(done, total int)
+	// Pool, when set and of size above 0, runs parts of the series on
+	// other engines instead of Workers goroutines (see [Pool]).
+	Pool Pool
 }
 
 // Forecast is one row of the forecasts output: the forecast of a method
@@ -75,17 +78,32 @@ type Result struct {
 	Scores    []Score    // one per method, best mean sMAPE first
 	Forecasts []Forecast // in series order, then method order, then horizon
 	Skips     []Skip     // in series order, then method order
+	// Engines is the number of places of Options.Pool that forecast at
+	// least one part (0 without a pool); PoolNote says why a part was
+	// forecast here instead, the first time one was ("" when none was).
+	Engines  int
+	PoolNote string
 }
 
 // Run forecasts the fit part of every series for as many periods as it has
 // test rows, with every method of o.Methods, and scores the forecasts
 // against the test values. Series are shared among o.Workers goroutines;
-// the result does not depend on their number. Run returns an error for an
+// the result does not depend on their number. With o.Pool, parts of the
+// series run on the pool's engines instead, with the same result. Run returns an error for an
 // unknown method label, or when ctx is cancelled (wrapping ctx.Err()).
 func Run(ctx context.Context, data []Series, o Options) (*Result, error) {
 	methods, err := o.methods()
 	if err != nil {
 		return nil, err
+	}
+	if o.Pool != nil && o.Pool.Size() > 0 && len(data) > 0 {
+		p, err := runPooled(ctx, data, methods, o, o.Pool)
+		if err != nil {
+			return nil, err
+		}
+		r := collect(data, methods, p.outcomes, max(o.Lag, 1))
+		r.Engines, r.PoolNote = p.engines, p.note
+		return r, nil
 	}
 	outcomes := make([]seriesOutcome, len(data))
 	jobs := make(chan int)
@@ -215,6 +233,9 @@ func forecastOne(nm namedMethod, y []float64, season, h int) (f []float64, err e
 			f, err = nil, fmt.Errorf("%s failed unexpectedly on this series (%v); please report it", nm.label, r)
 		}
 	}()
+	if h < 1 {
+		return nil, fmt.Errorf("the series has no held-out periods for %s to forecast", nm.label)
+	}
 	m, err := nm.build(h)
 	if err != nil {
 		return nil, err

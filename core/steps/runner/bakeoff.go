@@ -54,7 +54,10 @@ func (x *exec) bakeoff() error {
 	if len(data) == 0 {
 		return fmt.Errorf("no series of %s can be held out %d periods", d.file, last)
 	}
-	res, err := bakeoff.Run(x.ctx, data, bakeoff.Options{Season: max(d.season, 1), Lag: max(d.season, 1), Methods: methods, Workers: 1, Progress: x.progress})
+	// A host whose engine uses one core (the page) supplies a pool of
+	// further engines in the context; elsewhere goroutines share the work.
+	pool := bakeoff.PoolFrom(x.ctx)
+	res, err := bakeoff.Run(x.ctx, data, bakeoff.Options{Season: max(d.season, 1), Lag: max(d.season, 1), Methods: methods, Progress: x.progress, Pool: pool})
 	if err != nil {
 		return err
 	}
@@ -67,10 +70,25 @@ func (x *exec) bakeoff() error {
 	}
 	x.table(fmt.Sprintf("Bake-off over %s of %s, last %s held out", count(len(data), "series", "series"), d.file, count(last, "period", "periods")), t,
 		"Each method is fitted on every series' training part and scored on its held-out periods; a win is the best score on one series.")
+	x.bakeoffSpread(pool, res)
 	for _, sk := range res.Skips {
 		x.message(Warning, "%s could not forecast %q: %s", sk.Method, sk.Series, sk.Reason)
 	}
 	return nil
+}
+
+// bakeoffSpread says where the series of a bake-off were forecast when the
+// host offered a pool of further engines.
+func (x *exec) bakeoffSpread(pool bakeoff.Pool, res *bakeoff.Result) {
+	switch {
+	case pool == nil:
+	case pool.Size() <= 0:
+		x.message(Info, "The bake-off ran in one worker: %s.", pool.Why())
+	case res.PoolNote != "":
+		x.message(Info, "Part of the bake-off ran in one worker because another worker could not run it: %s.", res.PoolNote)
+	case res.Engines > 0:
+		x.message(Info, "The bake-off was shared among %s.", count(res.Engines, "worker", "workers"))
+	}
 }
 
 func catNames(x *exec) []string {
