@@ -212,7 +212,7 @@ func computeRows(t *testing.T, dir string, figs *benchFigures) {
 
 	var secs []float64
 	evalLong(p, fmt.Sprintf(`benchBakeoff(%d, 2)`, n), 10*time.Minute, &secs)
-	figs.Rows["bakeoff"] = benchSample{Values: secs, Unit: "s", Note: fmt.Sprintf("series dealt round-robin to %d workers, wall time seen by the page; the page's own bake-off step runs in one worker", n)}
+	figs.Rows["bakeoff"] = benchSample{Values: secs, Unit: "s", Note: fmt.Sprintf("series dealt round-robin to %d workers, wall time seen by the page; the page's own bake-off step shares its series among up to four workers the same way", n)}
 
 	var mem struct {
 		Start, Attach, Run float64
