@@ -105,6 +105,12 @@ func TestPanicIsolated(t *testing.T) {
 	if e == nil || !strings.Contains(e.Msg, "internal fault") || e.Line != 4 {
 		t.Errorf("step 3 error: %v", e)
 	}
+	if e != nil && strings.Contains(e.Msg, "index out of range") {
+		t.Errorf("step 3 error shows the runtime detail to the reader: %q", e.Msg)
+	}
+	if f := res.Outputs[2].Fault; !strings.Contains(f, "index out of range") {
+		t.Errorf("step 3 fault detail %q does not keep the runtime value for a report", f)
+	}
 	if o := res.Outputs[5]; o.WaitsOn != 3 {
 		t.Errorf("step 6 waits on %d, want 3", o.WaitsOn)
 	}

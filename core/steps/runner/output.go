@@ -39,6 +39,10 @@ type Output struct {
 	Error   *steps.Error `json:"error,omitempty"`
 	WaitsOn int          `json:"waitsOn,omitempty"` // the failed step this one waits on
 	Blocks  []Block      `json:"blocks"`
+	// Fault holds the runtime detail of an internal fault (a failure of the
+	// engine, not of the input) for a bug report; the page does not show it,
+	// since Error already says what happened in plain words. Empty otherwise.
+	Fault string `json:"fault,omitempty"`
 	// Key is a digest of what the output shows: two outputs with the same
 	// Key have the same Step, Verb, Status, Error (but for its line),
 	// WaitsOn and Blocks; Line and Text may differ, after an edit that moves

@@ -191,7 +191,8 @@ func (r *Runner) runStep(ctx context.Context, st *state, s *steps.Step, data Dat
 	defer func() {
 		if p := recover(); p != nil {
 			after, out = fail(st, s, Output{Step: s.N, Line: s.Line, Text: s.Text, Verb: s.Verb, Blocks: []Block{}},
-				runError(s, s.Column, fmt.Sprintf("the step stopped on an internal fault (%v); the steps before it are unaffected. Please report this session", p)))
+				runError(s, s.Column, "the step stopped on an internal fault; the steps before it are unaffected. Please report this session"))
+			out.Fault = fmt.Sprint(p)
 		}
 	}()
 	if r.fault != nil {
