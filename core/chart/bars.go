@@ -38,24 +38,8 @@ func (b Bars) SVG() string {
 	desc := b.describe(labels, vr)
 	vr.add(0)
 	c := newCanvas(b.Frame, w, h, desc, 96*min(n, 4*w)*max(len(b.Series), 1))
-	top := 10.0
-	if b.Title != "" {
-		top = titleHeight
-	}
-	lh := legendHeight(items, float64(w))
-	ar := area{top: top + lh + 8, right: float64(w) - 18, bottom: float64(h) - 28}
-	if b.XTitle != "" {
-		ar.bottom -= 18
-	}
-	ax := niceAxis(vr, max(3, int(ar.height()/48)))
-	ar.left = valueAxisWidth(ax, b.YTitle)
-	p := periodAxis{n: n, ar: ar}
-	drawLegend(c, items, top, float64(w))
-	drawHoldout(c, p, b.HoldoutStart, b.HoldoutEnd, b.HoldoutLabel)
-	drawValueAxis(c, ax, ar, b.YTitle)
-	if n == 0 || empty {
-		c.noData(ar)
-	}
+	ax, p := drawOverPeriods(c, b.Frame, w, h, items, vr, n, holdout{b.HoldoutStart, b.HoldoutEnd, b.HoldoutLabel}, empty)
+	ar := p.ar
 	drawBarGroups(c, p, ax, b.Series)
 	y0 := ax.y(0, ar)
 	c.line(ar.left, y0, ar.right, y0, "qc-zero")

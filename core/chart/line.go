@@ -50,24 +50,8 @@ func (l Line) SVG() string {
 		vr.add(0)
 	}
 	c := newCanvas(l.Frame, w, h, l.describe(labels, vr), 64*min(n, 10*w)*max(len(l.Series), 1))
-	top := 10.0
-	if l.Title != "" {
-		top = titleHeight
-	}
-	lh := legendHeight(items, float64(w))
-	ar := area{top: top + lh + 8, right: float64(w) - 18, bottom: float64(h) - 28}
-	if l.XTitle != "" {
-		ar.bottom -= 18
-	}
-	ax := niceAxis(vr, max(3, int(ar.height()/48)))
-	ar.left = valueAxisWidth(ax, l.YTitle)
-	p := periodAxis{n: n, ar: ar}
-	drawLegend(c, items, top, float64(w))
-	drawHoldout(c, p, l.HoldoutStart, l.HoldoutEnd, l.HoldoutLabel)
-	drawValueAxis(c, ax, ar, l.YTitle)
-	if n == 0 || !vr.ok {
-		c.noData(ar)
-	}
+	ax, p := drawOverPeriods(c, l.Frame, w, h, items, vr, n, holdout{l.HoldoutStart, l.HoldoutEnd, l.HoldoutLabel}, !vr.ok)
+	ar := p.ar
 	for i, s := range l.Series {
 		drawBands(c, p, ax, s, slotOf(l.Series, i))
 	}
